@@ -1,0 +1,19 @@
+package eluvia.transport.numerical;
+
+/**
+ * How the solver approximates the advective flux at a face between two cells.
+ */
+public enum AdvectionScheme {
+    /**
+     * Linear interpolation between the two cell centres: second order in space, and monotone as
+     * long as the cell Peclet number q dz / (theta_m D_m) is at most 2. The grid is refined within
+     * each layer until that holds (up to the cell limit of the settings); any face where it still
+     * fails, for instance at a layer boundary between very different cells, falls back to upwind.
+     */
+    CENTRAL,
+    /**
+     * The upstream cell's value: monotone at any cell Peclet number but first order, adding a
+     * numerical dispersivity of about dz / 2 to the physical one.
+     */
+    UPWIND
+}
