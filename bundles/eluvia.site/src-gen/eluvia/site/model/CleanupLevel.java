@@ -1,0 +1,105 @@
+/**
+ */
+package eluvia.site.model;
+
+import org.eclipse.emf.ecore.EObject;
+
+/**
+ * <!-- begin-user-doc -->
+ * A representation of the model object '<em><b>Cleanup Level</b></em>'.
+ * <!-- end-user-doc -->
+ *
+ * <!-- begin-model-doc -->
+ * The concentration a contaminant must be brought below, and the basis on which the level was set.
+ * <!-- end-model-doc -->
+ *
+ * <p>
+ * The following features are supported:
+ * </p>
+ * <ul>
+ *   <li>{@link eluvia.site.model.CleanupLevel#getContaminant <em>Contaminant</em>}</li>
+ *   <li>{@link eluvia.site.model.CleanupLevel#getSoilLevelMilligramsPerKg <em>Soil Level Milligrams Per Kg</em>}</li>
+ *   <li>{@link eluvia.site.model.CleanupLevel#getBasis <em>Basis</em>}</li>
+ * </ul>
+ *
+ * @see eluvia.site.model.SitePackage#getCleanupLevel()
+ * @model
+ * @generated
+ */
+public interface CleanupLevel extends EObject {
+	/**
+	 * Returns the value of the '<em><b>Contaminant</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The contaminant the level applies to.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Contaminant</em>' reference.
+	 * @see #setContaminant(Contaminant)
+	 * @see eluvia.site.model.SitePackage#getCleanupLevel_Contaminant()
+	 * @model required="true"
+	 * @generated
+	 */
+	Contaminant getContaminant();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.CleanupLevel#getContaminant <em>Contaminant</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Contaminant</em>' reference.
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	void setContaminant(Contaminant value);
+
+	/**
+	 * Returns the value of the '<em><b>Soil Level Milligrams Per Kg</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Cleanup level in soil, in mg/kg of dry soil.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Soil Level Milligrams Per Kg</em>' attribute.
+	 * @see #setSoilLevelMilligramsPerKg(double)
+	 * @see eluvia.site.model.SitePackage#getCleanupLevel_SoilLevelMilligramsPerKg()
+	 * @model
+	 * @generated
+	 */
+	double getSoilLevelMilligramsPerKg();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.CleanupLevel#getSoilLevelMilligramsPerKg <em>Soil Level Milligrams Per Kg</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Soil Level Milligrams Per Kg</em>' attribute.
+	 * @see #getSoilLevelMilligramsPerKg()
+	 * @generated
+	 */
+	void setSoilLevelMilligramsPerKg(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Basis</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Where the level comes from, in the user's own words (rule, permit, risk assessment).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Basis</em>' attribute.
+	 * @see #setBasis(String)
+	 * @see eluvia.site.model.SitePackage#getCleanupLevel_Basis()
+	 * @model
+	 * @generated
+	 */
+	String getBasis();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.CleanupLevel#getBasis <em>Basis</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Basis</em>' attribute.
+	 * @see #getBasis()
+	 * @generated
+	 */
+	void setBasis(String value);
+
+} // CleanupLevel

@@ -1,0 +1,181 @@
+/**
+ */
+package eluvia.site.model;
+
+import org.eclipse.emf.common.util.EList;
+
+import org.eclipse.emf.ecore.EObject;
+
+/**
+ * <!-- begin-user-doc -->
+ * A representation of the model object '<em><b>Project</b></em>'.
+ * <!-- end-user-doc -->
+ *
+ * <!-- begin-model-doc -->
+ * The root of a project file (.eluvia): one site, the contaminants of concern, their cleanup levels and the flushing designs compared for the site.
+ * <!-- end-model-doc -->
+ *
+ * <p>
+ * The following features are supported:
+ * </p>
+ * <ul>
+ *   <li>{@link eluvia.site.model.Project#getName <em>Name</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getDescription <em>Description</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getSchemaVersion <em>Schema Version</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getSite <em>Site</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getContaminants <em>Contaminants</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getCleanupLevels <em>Cleanup Levels</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getFlushingDesigns <em>Flushing Designs</em>}</li>
+ * </ul>
+ *
+ * @see eluvia.site.model.SitePackage#getProject()
+ * @model
+ * @generated
+ */
+public interface Project extends EObject {
+	/**
+	 * Returns the value of the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The project's name, shown in titles and reports.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Name</em>' attribute.
+	 * @see #setName(String)
+	 * @see eluvia.site.model.SitePackage#getProject_Name()
+	 * @model
+	 * @generated
+	 */
+	String getName();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getName <em>Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Name</em>' attribute.
+	 * @see #getName()
+	 * @generated
+	 */
+	void setName(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Description</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Free text: purpose, client, status.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Description</em>' attribute.
+	 * @see #setDescription(String)
+	 * @see eluvia.site.model.SitePackage#getProject_Description()
+	 * @model
+	 * @generated
+	 */
+	String getDescription();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getDescription <em>Description</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Description</em>' attribute.
+	 * @see #getDescription()
+	 * @generated
+	 */
+	void setDescription(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Schema Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The schema version of the file this project was read from or will be written as (an integer, no unit). eluvia.site.files.ProjectFiles writes the current version on save and migrates older versions on load; 0 means not yet saved.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Schema Version</em>' attribute.
+	 * @see #setSchemaVersion(int)
+	 * @see eluvia.site.model.SitePackage#getProject_SchemaVersion()
+	 * @model
+	 * @generated
+	 */
+	int getSchemaVersion();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getSchemaVersion <em>Schema Version</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Schema Version</em>' attribute.
+	 * @see #getSchemaVersion()
+	 * @generated
+	 */
+	void setSchemaVersion(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Site</b></em>' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The site: soil layers and treatment zones.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Site</em>' containment reference.
+	 * @see #setSite(Site)
+	 * @see eluvia.site.model.SitePackage#getProject_Site()
+	 * @model containment="true" required="true"
+	 * @generated
+	 */
+	Site getSite();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getSite <em>Site</em>}' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Site</em>' containment reference.
+	 * @see #getSite()
+	 * @generated
+	 */
+	void setSite(Site value);
+
+	/**
+	 * Returns the value of the '<em><b>Contaminants</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.Contaminant}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The contaminants of concern with their properties.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Contaminants</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_Contaminants()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Contaminant> getContaminants();
+
+	/**
+	 * Returns the value of the '<em><b>Cleanup Levels</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.CleanupLevel}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The cleanup level of each contaminant.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Cleanup Levels</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_CleanupLevels()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<CleanupLevel> getCleanupLevels();
+
+	/**
+	 * Returns the value of the '<em><b>Flushing Designs</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.FlushingDesign}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The in-situ flushing alternatives considered.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Flushing Designs</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_FlushingDesigns()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<FlushingDesign> getFlushingDesigns();
+
+} // Project

@@ -1,0 +1,105 @@
+/**
+ */
+package eluvia.site.model;
+
+import org.eclipse.emf.ecore.EFactory;
+
+/**
+ * <!-- begin-user-doc -->
+ * The <b>Factory</b> for the model.
+ * It provides a create method for each non-abstract class of the model.
+ * <!-- end-user-doc -->
+ * @see eluvia.site.model.SitePackage
+ * @generated
+ */
+public interface SiteFactory extends EFactory {
+	/**
+	 * The singleton instance of the factory.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	SiteFactory eINSTANCE = eluvia.site.model.impl.SiteFactoryImpl.init();
+
+	/**
+	 * Returns a new object of class '<em>Project</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Project</em>'.
+	 * @generated
+	 */
+	Project createProject();
+
+	/**
+	 * Returns a new object of class '<em>Site</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Site</em>'.
+	 * @generated
+	 */
+	Site createSite();
+
+	/**
+	 * Returns a new object of class '<em>Soil Layer</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Soil Layer</em>'.
+	 * @generated
+	 */
+	SoilLayer createSoilLayer();
+
+	/**
+	 * Returns a new object of class '<em>Contaminant</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Contaminant</em>'.
+	 * @generated
+	 */
+	Contaminant createContaminant();
+
+	/**
+	 * Returns a new object of class '<em>Cleanup Level</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Cleanup Level</em>'.
+	 * @generated
+	 */
+	CleanupLevel createCleanupLevel();
+
+	/**
+	 * Returns a new object of class '<em>Treatment Zone</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Treatment Zone</em>'.
+	 * @generated
+	 */
+	TreatmentZone createTreatmentZone();
+
+	/**
+	 * Returns a new object of class '<em>Source Concentration</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Source Concentration</em>'.
+	 * @generated
+	 */
+	SourceConcentration createSourceConcentration();
+
+	/**
+	 * Returns a new object of class '<em>Flushing Design</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Flushing Design</em>'.
+	 * @generated
+	 */
+	FlushingDesign createFlushingDesign();
+
+	/**
+	 * Returns the package supported by this factory.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the package supported by this factory.
+	 * @generated
+	 */
+	SitePackage getSitePackage();
+
+} //SiteFactory

@@ -1,0 +1,248 @@
+package eluvia.site.validation;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.function.Consumer;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+
+import org.eclipse.emf.ecore.EObject;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+import eluvia.site.model.CleanupLevel;
+import eluvia.site.model.Contaminant;
+import eluvia.site.model.FlushingDesign;
+import eluvia.site.model.Project;
+import eluvia.site.model.SiteFactory;
+import eluvia.site.model.SitePackage;
+import eluvia.site.model.SoilLayer;
+import eluvia.site.model.SourceConcentration;
+import eluvia.site.model.TreatmentZone;
+import eluvia.site.tests.TestProjects;
+
+/**
+ * Field by field: each case breaks one field of the (valid) shipped example and expects exactly
+ * that field of that object to be reported, with its value, the allowed range and a fix.
+ * Physical ranges are facts of the trade (fractions in (0, 1), depths increasing downwards,
+ * water content at most the porosity, ...), marked "common practice" where they are usual spans.
+ */
+final class SiteValidatorTest {
+
+    private static SoilLayer layer(Project p, int i) {
+        return p.getSite().getLayers().get(i);
+    }
+
+    private static Contaminant contaminant(Project p, int i) {
+        return p.getContaminants().get(i);
+    }
+
+    private static TreatmentZone zone(Project p) {
+        return p.getSite().getZones().get(0);
+    }
+
+    private static FlushingDesign design(Project p) {
+        return p.getFlushingDesigns().get(0);
+    }
+
+    private static CleanupLevel level(Project p, int i) {
+        return p.getCleanupLevels().get(i);
+    }
+
+    private static SourceConcentration source(Project p, int i) {
+        return zone(p).getSourceConcentrations().get(i);
+    }
+
+    private static Arguments error(String what, Consumer<Project> change, Function<Project, EObject> object,
+            String field, String value, String range) {
+        return Arguments.of(what, change, object, field, Severity.ERROR, value, range);
+    }
+
+    private static Arguments warning(String what, Consumer<Project> change, Function<Project, EObject> object,
+            String field, String value, String range) {
+        return Arguments.of(what, change, object, field, Severity.WARNING, value, range);
+    }
+
+    static Stream<Arguments> brokenFields() {
+        return Stream.of(
+                // Project and site
+                warning("project name empty", p -> p.setName(" "), p -> p, "name", "(empty)", "not empty"),
+                error("schema version from the future", p -> p.setSchemaVersion(99), p -> p, "schemaVersion", "99", "0 (not saved yet) to"),
+                error("no site", p -> p.setSite(null), p -> p, "site", "(none)", "a site"),
+                warning("site name empty", p -> p.getSite().setName(null), p -> p.getSite(), "name", "(empty)", "not empty"),
+                error("no layers", p -> p.getSite().getLayers().clear(), p -> p.getSite(), "layers", "(none)", "at least one soil layer"),
+                warning("no zones", p -> { p.getFlushingDesigns().clear(); p.getSite().getZones().clear(); },
+                        p -> p.getSite(), "zones", "(none)", "at least one treatment zone"),
+                // Soil layers
+                warning("layer name empty", p -> layer(p, 0).setName(""), p -> layer(p, 0), "name", "(empty)", "not empty"),
+                warning("duplicate layer names", p -> layer(p, 1).setName("silty SAND"), p -> layer(p, 1), "name", "'silty SAND'", "a name no other layer has"),
+                error("negative top depth", p -> layer(p, 0).setTopDepthMetres(-0.5), p -> layer(p, 0), "topDepthMetres", "-0.5", "[0, bottom depth)"),
+                warning("first layer below the surface", p -> layer(p, 0).setTopDepthMetres(0.2), p -> layer(p, 0), "topDepthMetres", "0.2", "0 for the first layer"),
+                error("bottom above top", p -> layer(p, 0).setBottomDepthMetres(0.0), p -> layer(p, 0), "bottomDepthMetres", "0", "greater than the top depth 0 m"),
+                error("bottom not a number", p -> layer(p, 2).setBottomDepthMetres(Double.NaN), p -> layer(p, 2), "bottomDepthMetres", "NaN", "a finite depth"),
+                error("gap between layers", p -> layer(p, 1).setTopDepthMetres(1.6), p -> layer(p, 1), "topDepthMetres", "1.6",
+                        "equal to the bottom depth of the layer above (1.5 m)"),
+                error("overlapping layers", p -> layer(p, 2).setTopDepthMetres(2.5), p -> layer(p, 2), "topDepthMetres", "2.5",
+                        "equal to the bottom depth of the layer above (3 m)"),
+                error("bulk density zero", p -> layer(p, 0).setBulkDensityKgPerCubicMetre(0), p -> layer(p, 0), "bulkDensityKgPerCubicMetre", "0", "(0, 2650) kg/m3"),
+                error("bulk density above the particle density",
+                        p -> layer(p, 0).setBulkDensityKgPerCubicMetre(2700), p -> layer(p, 0), "bulkDensityKgPerCubicMetre", "2700", "(0, 2650) kg/m3"),
+                warning("bulk density unusual", p -> { layer(p, 0).setBulkDensityKgPerCubicMetre(900); layer(p, 0).setPorosity(0.62); },
+                        p -> layer(p, 0), "bulkDensityKgPerCubicMetre", "900", "usually 1000 to 2100 kg/m3"),
+                error("porosity above one", p -> layer(p, 0).setPorosity(1.2), p -> layer(p, 0), "porosity", "1.2", "(0, 1)"),
+                error("porosity zero", p -> layer(p, 0).setPorosity(0), p -> layer(p, 0), "porosity", "0", "(0, 1)"),
+                warning("porosity inconsistent with bulk density", p -> { layer(p, 0).setPorosity(0.6); layer(p, 0).setWaterContent(0.3); },
+                        p -> layer(p, 0), "porosity", "0.6", "within 0.1 of 1 - bulk density / 2650 kg/m3 = 0.396"),
+                error("water content above porosity", p -> layer(p, 0).setWaterContent(0.45), p -> layer(p, 0), "waterContent", "0.45", "(0, porosity = 0.4]"),
+                error("water content zero", p -> layer(p, 1).setWaterContent(0), p -> layer(p, 1), "waterContent", "0", "(0, porosity]"),
+                error("foc negative", p -> layer(p, 0).setOrganicCarbonFraction(-0.001), p -> layer(p, 0), "organicCarbonFraction", "-0.001", "[0, 1)"),
+                warning("foc entered as percent", p -> layer(p, 0).setOrganicCarbonFraction(0.5), p -> layer(p, 0), "organicCarbonFraction", "0.5", "usually below 0.2"),
+                error("conductivity zero", p -> layer(p, 0).setSaturatedConductivityMetresPerDay(0), p -> layer(p, 0), "saturatedConductivityMetresPerDay", "0", "greater than 0 m/d"),
+                warning("conductivity implausibly high", p -> layer(p, 0).setSaturatedConductivityMetresPerDay(5e4), p -> layer(p, 0),
+                        "saturatedConductivityMetresPerDay", "50000", "up to about 10000 m/d"),
+                error("dispersivity zero", p -> layer(p, 0).setDispersivityMetres(0), p -> layer(p, 0), "dispersivityMetres", "0", "greater than 0 m"),
+                warning("dispersivity above thickness", p -> layer(p, 0).setDispersivityMetres(2.0), p -> layer(p, 0), "dispersivityMetres", "2", "at most the layer thickness 1.5 m"),
+                warning("texture class empty", p -> layer(p, 2).setTextureClass(""), p -> layer(p, 2), "textureClass", "(empty)", "not empty"),
+                // Contaminants
+                error("contaminant name empty", p -> contaminant(p, 0).setName(null), p -> contaminant(p, 0), "name", "(empty)", "not empty"),
+                error("duplicate contaminant", p -> contaminant(p, 1).setName("benzene"), p -> contaminant(p, 1), "name", "'benzene'", "a name no other contaminant has"),
+                warning("CAS check digit wrong", p -> contaminant(p, 0).setCasNumber("71-43-3"), p -> contaminant(p, 0), "casNumber", "'71-43-3'", "correct check digit"),
+                error("Koc negative", p -> contaminant(p, 0).setKocLitresPerKg(-1), p -> contaminant(p, 0), "kocLitresPerKg", "-1", "0 or more L/kg"),
+                warning("Koc zero without Kd", p -> contaminant(p, 0).setKocLitresPerKg(0), p -> contaminant(p, 0), "kocLitresPerKg", "0", "greater than 0 L/kg"),
+                error("Kd infinite", p -> contaminant(p, 1).setKdLitresPerKg(Double.POSITIVE_INFINITY), p -> contaminant(p, 1), "kdLitresPerKg", "Infinity", "0 or more L/kg"),
+                error("diffusion zero", p -> contaminant(p, 0).setDiffusionSquareMetresPerSecond(0), p -> contaminant(p, 0), "diffusionSquareMetresPerSecond", "0", "greater than 0 m2/s"),
+                warning("diffusion in cm2/s by mistake", p -> contaminant(p, 0).setDiffusionSquareMetresPerSecond(1e-5), p -> contaminant(p, 0),
+                        "diffusionSquareMetresPerSecond", "1.0E-5", "about 1e-10 to 5e-9 m2/s"),
+                error("half-life negative", p -> contaminant(p, 0).setHalfLifeDays(-3), p -> contaminant(p, 0), "halfLifeDays", "-3", "0 (no decay) or more days"),
+                // Cleanup levels
+                error("cleanup level without contaminant", p -> level(p, 0).setContaminant(null), p -> level(p, 0), "contaminant", "(none)", "a contaminant of this project"),
+                error("cleanup level for a foreign contaminant", p -> level(p, 0).setContaminant(SiteFactory.eINSTANCE.createContaminant()),
+                        p -> level(p, 0), "contaminant", "''", "a contaminant of this project"),
+                error("two levels for one contaminant", p -> level(p, 1).setContaminant(contaminant(p, 0)), p -> level(p, 1), "contaminant", "'Benzene'",
+                        "one cleanup level per contaminant"),
+                warning("contaminant without a level", p -> p.getCleanupLevels().remove(1), p -> contaminant(p, 1), "cleanupLevels", "(none)",
+                        "a cleanup level for each contaminant"),
+                error("soil level zero", p -> level(p, 0).setSoilLevelMilligramsPerKg(0), p -> level(p, 0), "soilLevelMilligramsPerKg", "0", "greater than 0 mg/kg"),
+                warning("basis empty", p -> level(p, 0).setBasis(""), p -> level(p, 0), "basis", "(empty)", "not empty"),
+                // Zones
+                warning("zone name empty", p -> zone(p).setName(""), p -> zone(p), "name", "(empty)", "not empty"),
+                error("zone area negative", p -> zone(p).setAreaSquareMetres(-450), p -> zone(p), "areaSquareMetres", "-450", "greater than 0 m2"),
+                error("zone top negative", p -> zone(p).setTopDepthMetres(-1), p -> zone(p), "topDepthMetres", "-1", "[0, bottom depth)"),
+                error("zone bottom above top", p -> zone(p).setBottomDepthMetres(0), p -> zone(p), "bottomDepthMetres", "0", "greater than the top depth"),
+                error("zone below the soil profile", p -> zone(p).setBottomDepthMetres(5), p -> zone(p), "bottomDepthMetres", "5",
+                        "at most the bottom of the soil profile, 4 m"),
+                error("zone above the soil profile", p -> { layer(p, 0).setTopDepthMetres(0.5); zone(p).setTopDepthMetres(0.2); },
+                        p -> zone(p), "topDepthMetres", "0.2", "at least the top of the soil profile, 0.5 m"),
+                warning("zone without concentrations", p -> zone(p).getSourceConcentrations().clear(), p -> zone(p), "sourceConcentrations", "(none)",
+                        "at least one contaminant"),
+                error("source without contaminant", p -> source(p, 0).setContaminant(null), p -> source(p, 0), "contaminant", "(none)", "a contaminant of this project"),
+                error("two sources for one contaminant", p -> source(p, 1).setContaminant(contaminant(p, 0)), p -> source(p, 1), "contaminant", "'Benzene'",
+                        "one concentration per contaminant and zone"),
+                error("source concentration zero", p -> source(p, 0).setSoilConcentrationMilligramsPerKg(0), p -> source(p, 0),
+                        "soilConcentrationMilligramsPerKg", "0", "greater than 0 mg/kg"),
+                warning("target not below the initial concentration", p -> source(p, 0).setSoilConcentrationMilligramsPerKg(0.04), p -> source(p, 0),
+                        "soilConcentrationMilligramsPerKg", "0.04", "above the cleanup level 0.05 mg/kg"),
+                // Flushing designs
+                warning("design name empty", p -> design(p).setName(null), p -> design(p), "name", "(empty)", "not empty"),
+                error("design without zone", p -> design(p).setZone(null), p -> design(p), "zone", "(none)", "a treatment zone of this project"),
+                error("design for a foreign zone", p -> design(p).setZone(SiteFactory.eINSTANCE.createTreatmentZone()), p -> design(p), "zone", "''",
+                        "a treatment zone of this project"),
+                error("flux zero", p -> design(p).setDarcyFluxMetresPerDay(0), p -> design(p), "darcyFluxMetresPerDay", "0", "greater than 0 m/d"),
+                warning("flux above the tightest layer's conductivity", p -> design(p).setDarcyFluxMetresPerDay(0.8), p -> design(p), "darcyFluxMetresPerDay", "0.8",
+                        "at most the saturated conductivity of layer 'Silty sand', 0.5 m/d"),
+                error("eight days a week", p -> design(p).setOperatingDaysPerWeek(8), p -> design(p), "operatingDaysPerWeek", "8", "(0, 7]"),
+                error("capture above one", p -> design(p).setCaptureEfficiency(95), p -> design(p), "captureEfficiency", "95", "(0, 1]"),
+                error("max pore volumes below one", p -> design(p).setMaxPoreVolumes(0.5), p -> design(p), "maxPoreVolumes", "0.5", "[1, 1000000]"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("brokenFields")
+    void reportsTheBrokenField(String what, Consumer<Project> change, Function<Project, EObject> objectOf, String field,
+            Severity severity, String value, String range) {
+        Project project = TestProjects.example();
+        change.accept(project);
+        EObject object = objectOf.apply(project);
+
+        List<Problem> problems = SiteValidator.validate(project);
+
+        List<Problem> matching = problems.stream().filter(p -> p.object() == object && p.field().equals(field))
+                .collect(Collectors.toList());
+        assertEquals(1, matching.size(), what + ": expected one problem on " + field + ", got " + problems);
+        Problem problem = matching.get(0);
+        assertEquals(severity, problem.severity(), problem.message());
+        assertEquals(value, problem.value(), problem.message());
+        assertTrue(problem.allowedRange().contains(range), problem.message());
+        assertFalse(problem.fix().isBlank(), "every problem says how to fix it: " + problem.message());
+        assertTrue(problem.message().startsWith(problem.objectLabel() + " field " + field + " = " + value + ": allowed "), problem.message());
+    }
+
+    @Test
+    void theMessageNamesObjectFieldValueRangeAndFix() {
+        Project project = TestProjects.example();
+        project.getSite().getLayers().get(0).setPorosity(1.2);
+
+        List<Problem> problems = SiteValidator.validate(project);
+
+        assertEquals(List.of("Layer 'Silty sand' field porosity = 1.2: allowed (0, 1); enter the total porosity as a fraction, e.g. 0.35"),
+                problems.stream().map(Problem::message).collect(Collectors.toList()));
+        assertEquals(SitePackage.Literals.SOIL_LAYER__POROSITY, problems.get(0).feature());
+        assertTrue(SiteValidator.hasErrors(problems));
+    }
+
+    @Test
+    void unnamedObjectsAreLabelledByPosition() {
+        Project project = TestProjects.example();
+        project.getSite().getLayers().get(1).setName("");
+        project.getSite().getLayers().get(1).setPorosity(-1);
+
+        Problem problem = SiteValidator.validate(project).stream().filter(p -> p.field().equals("porosity")).findFirst().orElseThrow();
+
+        assertEquals("Layer 2", problem.objectLabel());
+    }
+
+    @Test
+    void aNullProjectIsOneError() {
+        List<Problem> problems = SiteValidator.validate(null);
+
+        assertEquals(1, problems.size());
+        assertEquals(Severity.ERROR, problems.get(0).severity());
+    }
+
+    @Test
+    void warningsAloneAreNotErrors() {
+        Project project = TestProjects.example();
+        project.setName("");
+
+        assertFalse(SiteValidator.hasErrors(SiteValidator.validate(project)));
+    }
+
+    @Test
+    void casCheckDigitFollowsTheRegistryRule() {
+        // CAS numbers of benzene, trichloroethylene, tetrachloroethylene and water, from memory;
+        // the check-digit rule (weighted digit sum mod 10) is the CAS registry's published one.
+        assertTrue(SiteValidator.isValidCasNumber("71-43-2"));
+        assertTrue(SiteValidator.isValidCasNumber("79-01-6"));
+        assertTrue(SiteValidator.isValidCasNumber("127-18-4"));
+        assertTrue(SiteValidator.isValidCasNumber("7732-18-5"));
+        assertFalse(SiteValidator.isValidCasNumber("7732-18-4"));
+        assertFalse(SiteValidator.isValidCasNumber("71432"));
+        assertFalse(SiteValidator.isValidCasNumber("1-43-2"));
+    }
+
+    @Test
+    void problemsRefuseMissingParts() {
+        assertThrows(NullPointerException.class, () -> new Problem(null, null, "x", "f", "v", "r", ""));
+        assertThrows(NullPointerException.class, () -> new Problem(Severity.ERROR, null, null, "f", "v", "r", ""));
+        assertThrows(NullPointerException.class, () -> new Problem(Severity.ERROR, null, "x", null, "v", "r", ""));
+        assertThrows(NullPointerException.class, () -> new Problem(Severity.ERROR, null, "x", "f", null, "r", ""));
+        assertThrows(NullPointerException.class, () -> new Problem(Severity.ERROR, null, "x", "f", "v", null, ""));
+        assertEquals("", new Problem(Severity.ERROR, null, "x", "f", "v", "r", null).fix());
+    }
+}
