@@ -120,7 +120,7 @@ public final class OrdinaryKriging {
                 int[] set = search.sortedIndices();
                 DecompositionSolver solver = Arrays.equals(set, previousSet) ? previousSolver
                         : decompose(samples, set, e, n, depth);
-                double[] result = solve(samples, set, solver, e, n, depth);
+                double[] result = solve(samples, set, solver, e, n, depth, null);
                 concentration[base + i] = result[0];
                 variance[base + i] = result[1];
                 previousSet = set;
@@ -148,14 +148,10 @@ public final class OrdinaryKriging {
             nearestFirst[m] = search.index(m);
         }
         DecompositionSolver solver = decompose(samples, nearestFirst, eastingMetres, northingMetres, depthMetres);
-        RealVector x = solver.solve(rightHandSide(samples, nearestFirst, eastingMetres, northingMetres, depthMetres));
-        double[] result = solve(samples, nearestFirst, solver, eastingMetres, northingMetres, depthMetres);
-        double[] weights = new double[found];
-        for (int m = 0; m < found; m++) {
-            weights[m] = x.getEntry(m);
-        }
-        return new KrigingPointEstimate(result[0], result[1], nearestFirst, weights,
-                x.getEntry(found) * variogram.sillMgPerKgSquared());
+        double[] weights = new double[found + 1];
+        double[] result = solve(samples, nearestFirst, solver, eastingMetres, northingMetres, depthMetres, weights);
+        return new KrigingPointEstimate(result[0], result[1], nearestFirst, Arrays.copyOf(weights, found),
+                weights[found] * variogram.sillMgPerKgSquared());
     }
 
     private DecompositionSolver decompose(SampleSet samples, int[] set, double e, double n, double depth) {
@@ -190,9 +186,12 @@ public final class OrdinaryKriging {
         return new ArrayRealVector(b, false);
     }
 
-    /** Returns {estimate mg/kg, variance (mg/kg)^2}. */
+    /**
+     * Returns {estimate mg/kg, variance (mg/kg)^2}; when {@code solution} is given it receives the
+     * weights followed by the normalised Lagrange multiplier (mu / sill).
+     */
     private double[] solve(SampleSet samples, int[] set, DecompositionSolver solver, double e, double n,
-            double depth) {
+            double depth, double[] solution) {
         RealVector b = rightHandSide(samples, set, e, n, depth);
         RealVector x;
         try {
@@ -201,6 +200,11 @@ public final class OrdinaryKriging {
             throw singular(samples, set, e, n, depth);
         }
         int m = set.length;
+        if (solution != null) {
+            for (int r = 0; r <= m; r++) {
+                solution[r] = x.getEntry(r);
+            }
+        }
         double estimate = 0;
         double weightedCovariance = 0;
         for (int r = 0; r < m; r++) {

@@ -110,7 +110,9 @@ public final class SampleSet {
                 nonDetects++;
             }
             double value = sample.valueMgPerKg(nonDetectRule);
-            List<Double> key = List.of(sample.eastingMetres(), sample.northingMetres(), sample.midDepthMetres());
+            // + 0.0 turns -0.0 into 0.0, which Double.equals would otherwise tell apart
+            List<Double> key = List.of(sample.eastingMetres() + 0.0, sample.northingMetres() + 0.0,
+                    sample.midDepthMetres() + 0.0);
             // point[4] counts the samples merged into the point, point[3] holds their running sum
             double[] point = merged.computeIfAbsent(key,
                     k -> new double[] { sample.eastingMetres(), sample.northingMetres(), sample.midDepthMetres(), 0, 0 });

@@ -78,6 +78,14 @@ final class SamplesAndBlockModelTest {
     }
 
     @Test
+    void negativeZeroCoordinatesMergeWithZero() {
+        SampleSet set = SampleSet.of(List.of(SoilSample.detected(-0.0, 0, 1, 1, 2), SoilSample.detected(0.0, -0.0, 1, 1, 4)),
+                NonDetectRule.ZERO, 1.0);
+        assertEquals(1, set.size()); // the same place: one point at the mean, 3 mg/kg
+        assertEquals(3.0, set.valueMgPerKg(0));
+    }
+
+    @Test
     void badSampleSetsNameTheField() {
         List<SoilSample> one = List.of(SoilSample.detected(0, 0, 0, 1, 1));
         assertRejects("number of samples", "1 or more", () -> SampleSet.of(List.of(), NonDetectRule.ZERO));
