@@ -11,7 +11,7 @@ final class BlockModelBenchmarkCaseTest {
     @Test
     void millionBlocksAndThreeHundredSamples_reproducibleBySeed() {
         BlockModelBenchmarkCase first = BlockModelBenchmarkCase.create();
-        assertEquals(1_000_000, first.blockModel().blockCount()); // the size stated in the task: 10^6 blocks
+        assertEquals(1_000_000, first.blockModel().blockCount()); // the size the benchmark promises: 10^6 blocks (100 x 100 x 100, hand)
         assertEquals(300, first.samples().size()); // and 300 samples
         assertEquals(300, first.sampleSet().size()); // 30 borings x 10 distinct intervals: nothing merged
         assertEquals(first.samples(), BlockModelBenchmarkCase.create(BlockModelBenchmarkCase.DEFAULT_SEED).samples());
