@@ -1,7 +1,5 @@
 package eluvia.cost.internal;
 
-import java.util.Objects;
-
 import eluvia.cost.CostInputException;
 
 /** Argument checks that throw {@link CostInputException} with the quantity, value and range. */
@@ -64,10 +62,5 @@ public final class Checks {
                     "non-blank text");
         }
         return value;
-    }
-
-    /** Same as {@link Objects#equals} but reads better at call sites comparing units or currencies. */
-    public static boolean same(Object a, Object b) {
-        return Objects.equals(a, b);
     }
 }
