@@ -1,0 +1,105 @@
+package eluvia.app.cli;
+
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import eluvia.design.DesignInputException;
+import eluvia.design.DesignPipeline;
+import eluvia.design.DesignRun;
+import eluvia.design.FlushingDesignResult;
+import eluvia.report.DesignPackage;
+import eluvia.site.files.ProjectFileException;
+import eluvia.site.files.ProjectFiles;
+import eluvia.site.model.Project;
+import eluvia.site.validation.Problem;
+
+/** Loading, running and writing shared by {@code design} and {@code demo}. */
+final class ProjectRun {
+
+    private ProjectRun() {
+    }
+
+    /** Loads a project file, printing a message and returning null when it cannot be read. */
+    static Project load(Path file, PrintWriter err) {
+        if (!Files.isRegularFile(file)) {
+            err.println("project file " + file + " does not exist or is not a file");
+            return null;
+        }
+        try {
+            return ProjectFiles.load(file);
+        } catch (ProjectFileException e) {
+            err.println(file.getFileName() + ": " + e.getMessage());
+            return null;
+        }
+    }
+
+    /**
+     * Validates and runs a project and writes its design package.
+     *
+     * @return the exit code
+     */
+    static int designAndWrite(byte[] bytes, String name, Path outDir, PrintWriter out, PrintWriter err) {
+        Project project;
+        try {
+            project = ProjectFiles.load(new ByteArrayInputStream(bytes), name);
+        } catch (ProjectFileException e) {
+            err.println(name + ": " + e.getMessage());
+            return EluviaCommand.INVALID_PROJECT;
+        }
+        DesignRun run;
+        try {
+            run = DesignPipeline.run(project);
+        } catch (DesignInputException e) {
+            err.println(name + " has errors; nothing was written. Fix these and run again:");
+            for (Problem p : e.problems()) {
+                err.println("error: " + p.message());
+            }
+            return EluviaCommand.INVALID_PROJECT;
+        }
+        List<Path> files;
+        try {
+            files = DesignPackage.write(project, run, bytes, Environment.productVersion(), outDir);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the design package to " + outDir + ": " + e.getMessage(), e);
+        }
+        printHeadlines(run, out);
+        out.println();
+        out.println("Design package written to " + outDir + ":");
+        files.forEach(f -> out.println("  " + f));
+        out.println();
+        run.cautions().forEach(c -> out.println("CAUTION: " + c));
+        return EluviaCommand.OK;
+    }
+
+    static byte[] read(Path file) {
+        try {
+            return Files.readAllBytes(file);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static void printHeadlines(DesignRun run, PrintWriter out) {
+        out.println("Project: " + run.projectName());
+        for (FlushingDesignResult r : run.flushing()) {
+            out.println();
+            out.println("Flushing design '" + r.designName() + "' (zone '" + r.zoneName() + "', criterion: "
+                    + r.criterion().description() + ")");
+            if (!r.allReachable()) {
+                out.println("  cleanup level NOT reached within the pore-volume limit; see the notes in the package");
+            } else {
+                out.printf(java.util.Locale.ROOT, "  controlling contaminant   %s%n", r.controllingContaminant());
+                out.printf(java.util.Locale.ROOT, "  pore volumes              %.4g PV%n", r.poreVolumes());
+                out.printf(java.util.Locale.ROOT, "  duration                  %.4g calendar days (%.4g operating days)%n",
+                        r.calendarDays(), r.operatingDays());
+                out.printf(java.util.Locale.ROOT, "  water applied             %.4g m3%n", r.waterAppliedCubicMetres());
+                out.printf(java.util.Locale.ROOT, "  water to capture, treat   %.4g m3%n", r.waterCapturedCubicMetres());
+            }
+        }
+    }
+}

@@ -1,0 +1,161 @@
+package eluvia.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import eluvia.site.files.ExampleProjects;
+
+/** The command line run in-process; the product's processes are tested in eluvia.app.itests. */
+final class CommandLineTest {
+
+    private record Result(int code, String out, String err) {
+    }
+
+    private static Result run(Path dir, String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        Environment env = new Environment() {
+            @Override
+            public byte[] exampleProjectBytes() throws IOException {
+                try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
+                    return in.readAllBytes();
+                }
+            }
+
+            @Override
+            public String exampleProjectName() {
+                return ExampleProjects.RIVERSIDE_DEPOT;
+            }
+
+            @Override
+            public Path workingDirectory() {
+                return dir;
+            }
+        };
+        int code = EluviaCommand.run(args, env, new PrintWriter(out), new PrintWriter(err));
+        return new Result(code, out.toString(), err.toString());
+    }
+
+    private static double number(String json, String key) {
+        Matcher m = Pattern.compile("\"" + key + "\": ([-0-9.eE+]+)").matcher(json);
+        assertTrue(m.find(), key + " missing in " + json);
+        return Double.parseDouble(m.group(1));
+    }
+
+    private static final String[] CHECK_CASE = { "flush", "--thickness-m", "2", "--water-content", "0.3",
+            "--porosity", "0.35", "--bulk-density-kg-m3", "1600", "--kd-l-kg", "0.118", "--darcy-flux-m-d", "0.05",
+            "--dispersivity-m", "200", "--target-fraction", "0.01", "--area-m2", "100", "--json" };
+
+    @Test
+    void flushJsonGivesThePublishedRetardationAndTheWellMixedLimit(@TempDir Path dir) {
+        Result r = run(dir, CHECK_CASE);
+        assertEquals(0, r.code(), r.err());
+        // REFERENCES.md [COMP]: rho_b 1.6 kg/L, theta 0.3, Kd = 59 x 0.002 L/kg -> R = 1.6293
+        assertEquals(1.6293, number(r.out(), "retardation"), 5e-5);
+        // batch flush T = -R ln(C/C0) (US EPA pump-and-treat guidance), the P -> 0 limit (P = 0.01 here)
+        assertEquals(-1.6293 * Math.log(0.01), number(r.out(), "wellMixedPoreVolumes"), 1e-3);
+        assertEquals(-1.6293 * Math.log(0.01), number(r.out(), "poreVolumes"), 0.08);
+        double pv = number(r.out(), "poreVolumes");
+        // duration t = T theta L / q; water = T theta L A (REFERENCES.md symbols)
+        assertEquals(pv * 0.3 * 2 / 0.05, number(r.out(), "durationDays"), 1e-6 * pv * 12);
+        assertEquals(pv * 0.3 * 2 * 100, number(r.out(), "waterVolumeM3"), 1e-6 * pv * 60);
+        for (String key : new String[] { "peclet", "criterion", "model" }) {
+            assertTrue(r.out().contains("\"" + key + "\""), key);
+        }
+    }
+
+    @Test
+    void withoutAreaTheWaterVolumeIsNull(@TempDir Path dir) {
+        String[] args = java.util.Arrays.stream(CHECK_CASE).filter(a -> !a.equals("--area-m2") && !a.equals("100"))
+                .toArray(String[]::new);
+        Result r = run(dir, args);
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("\"waterVolumeM3\": null"), r.out());
+    }
+
+    @Test
+    void badValuesExitWithCodeTwoNamingTheOptionAndTheRange(@TempDir Path dir) {
+        String[][] cases = { { "--water-content", "0.5", "porosity" }, { "--porosity", "1.2", "between 0 and 1" },
+                { "--darcy-flux-m-d", "-1", "greater than 0" }, { "--target-fraction", "1", "between 0 and 1" },
+                { "--kd-l-kg", "-0.1", "0 or greater" }, { "--thickness-m", "0", "greater than 0" },
+                { "--criterion", "median", "effluent, mean or max" }, { "--darcy-flux-m-d", "fast", "" } };
+        for (String[] c : cases) {
+            String[] args = CHECK_CASE.clone();
+            boolean replaced = false;
+            for (int i = 0; i < args.length - 1; i++) {
+                if (args[i].equals(c[0])) {
+                    args[i + 1] = c[1];
+                    replaced = true;
+                }
+            }
+            if (!replaced) {
+                args = java.util.stream.Stream.concat(java.util.Arrays.stream(args), java.util.stream.Stream.of(c[0], c[1]))
+                        .toArray(String[]::new);
+            }
+            Result r = run(dir, args);
+            assertEquals(2, r.code(), c[0] + " " + c[1] + ": " + r.out() + r.err());
+            assertTrue(r.err().contains(c[0]), "message must name " + c[0] + ": " + r.err());
+            assertTrue(r.err().contains(c[2]), "message must give the range '" + c[2] + "': " + r.err());
+        }
+    }
+
+    @Test
+    void missingRequiredOptionExitsWithCodeTwo(@TempDir Path dir) {
+        Result r = run(dir, "flush", "--thickness-m", "2");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--water-content"), r.err());
+    }
+
+    @Test
+    void checkAndDesignOfTheExample(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("example.eluvia");
+        try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
+            Files.copy(in, file);
+        }
+        Result check = run(dir, "check", "example.eluvia");
+        assertEquals(0, check.code(), check.out() + check.err());
+        Result design = run(dir, "design", "example.eluvia", "--out", "package");
+        assertEquals(0, design.code(), design.err());
+        assertTrue(Files.isRegularFile(dir.resolve("package/results.json")));
+        assertTrue(Files.isRegularFile(dir.resolve("package/index.html")));
+        assertTrue(design.out().contains("pore volumes"), design.out());
+    }
+
+    @Test
+    void checkOfAnInvalidProjectExitsWithOneAndNamesTheField(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("bad.eluvia");
+        String text;
+        try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
+            text = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        }
+        // make the first porosity impossible
+        text = text.replaceFirst("porosity=\"[0-9.]+\"", "porosity=\"1.7\"");
+        Files.writeString(file, text);
+        Result check = run(dir, "check", "bad.eluvia");
+        assertEquals(1, check.code(), check.out() + check.err());
+        assertTrue(check.out().contains("porosity"), check.out());
+        Result design = run(dir, "design", "bad.eluvia", "--out", "package");
+        assertEquals(1, design.code());
+        assertTrue(!Files.exists(dir.resolve("package/results.json")), "nothing is written for an invalid project");
+    }
+
+    @Test
+    void demoWritesThePackageUnderTheWorkingFolder(@TempDir Path dir) {
+        Result r = run(dir, "demo");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(Files.isRegularFile(dir.resolve("eluvia-demo-output/results.json")));
+        assertTrue(r.out().contains("invented"), r.out());
+    }
+}
