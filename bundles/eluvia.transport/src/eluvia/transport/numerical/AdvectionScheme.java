@@ -7,8 +7,10 @@ public enum AdvectionScheme {
     /**
      * Linear interpolation between the two cell centres: second order in space, and monotone as
      * long as the cell Peclet number q dz / (theta_m D_m) is at most 2. The grid is refined within
-     * each layer until that holds (up to the cell limit of the settings); any face where it still
-     * fails, for instance at a layer boundary between very different cells, falls back to upwind.
+     * each layer until the cell Peclet number is at most {@link SolverSettings#maximumCellPeclet()}
+     * (default 0.25, never above 2), up to the cell limit of the settings; any face where 2 is
+     * still exceeded, for instance at a layer boundary between very different cells, falls back
+     * to upwind.
      */
     CENTRAL,
     /**

@@ -276,9 +276,10 @@ public final class NumericalFlushingSolver {
             baseTotal += base[l];
             long w = base[l];
             double disp = layer.dispersionTermSquareMetresPerDay(q);
-            if (settings.advectionScheme() == AdvectionScheme.CENTRAL && disp > 0) {
-                // cell Peclet q dz / (theta_m D_m) <= 2
-                double byPeclet = Math.ceil(layer.thicknessMetres() * q / (2 * disp) * (1 + 1e-12));
+            if (disp > 0) {
+                // cell Peclet number q dz / (theta_m D_m) at most the limit of the settings
+                double byPeclet = Math.ceil(layer.thicknessMetres() * q / (settings.maximumCellPeclet() * disp)
+                        * (1 - 1e-12));
                 w = Math.max(w, (long) Math.min(byPeclet, 1e9));
             }
             wanted[l] = (int) Math.min(w, Integer.MAX_VALUE / 4);

@@ -28,6 +28,8 @@ import eluvia.transport.TransportInputException;
 public final class SoilLayer {
     /** Largest bulk density accepted, kg/m3 (denser than any soil). */
     public static final double MAXIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE = 3000;
+    /** Smallest bulk density accepted, kg/m3 (lighter than any peat; catches g/cm3 given as kg/m3). */
+    public static final double MINIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE = 100;
 
     private final double thicknessMetres;
     private final double waterContent;
@@ -50,11 +52,11 @@ public final class SoilLayer {
                     "greater than 0 and at most the porosity " + porosity);
         }
         waterContent = b.waterContent;
-        if (!(b.bulkDensityKilogramsPerCubicMetre > 0
+        if (!(b.bulkDensityKilogramsPerCubicMetre >= MINIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE
                 && b.bulkDensityKilogramsPerCubicMetre <= MAXIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE)) {
             throw new TransportInputException("dry bulk density (kg/m3)", b.bulkDensityKilogramsPerCubicMetre,
-                    "greater than 0 and at most " + MAXIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE
-                            + " (give it in kg/m3, not g/cm3)");
+                    MINIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE + " to " + MAXIMUM_BULK_DENSITY_KILOGRAMS_PER_CUBIC_METRE
+                            + " (give it in kg/m3: 1.6 g/cm3 is 1600 kg/m3)");
         }
         bulkDensityKilogramsPerCubicMetre = b.bulkDensityKilogramsPerCubicMetre;
         if (b.isotherm == null) {

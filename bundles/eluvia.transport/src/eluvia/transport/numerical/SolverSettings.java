@@ -22,6 +22,7 @@ public final class SolverSettings {
     private final double maximumCellSizeMetres;
     private final int maximumCellCount;
     private final AdvectionScheme advectionScheme;
+    private final double maximumCellPeclet;
     private final double initialStepPoreVolumes;
     private final double minimumStepPoreVolumes;
     private final double maximumStepPoreVolumes;
@@ -45,6 +46,11 @@ public final class SolverSettings {
         }
         maximumCellCount = b.maximumCellCount;
         advectionScheme = Objects.requireNonNull(b.advectionScheme, "advection scheme");
+        if (!(b.maximumCellPeclet > 0 && b.maximumCellPeclet <= 2)) {
+            throw new TransportInputException("maximum cell Peclet number (dimensionless)", b.maximumCellPeclet,
+                    "greater than 0 and at most 2 (above 2 the central scheme oscillates)");
+        }
+        maximumCellPeclet = b.maximumCellPeclet;
         minimumStepPoreVolumes = TransportInputException.requirePositive("minimum time step (pore volumes)",
                 b.minimumStepPoreVolumes);
         if (!(b.maximumStepPoreVolumes >= minimumStepPoreVolumes) || Double.isInfinite(b.maximumStepPoreVolumes)) {
@@ -89,6 +95,7 @@ public final class SolverSettings {
         b.maximumCellSizeMetres = maximumCellSizeMetres;
         b.maximumCellCount = maximumCellCount;
         b.advectionScheme = advectionScheme;
+        b.maximumCellPeclet = maximumCellPeclet;
         b.initialStepPoreVolumes = initialStepPoreVolumes;
         b.minimumStepPoreVolumes = minimumStepPoreVolumes;
         b.maximumStepPoreVolumes = maximumStepPoreVolumes;
@@ -117,6 +124,15 @@ public final class SolverSettings {
     /** Advection scheme. */
     public AdvectionScheme advectionScheme() {
         return advectionScheme;
+    }
+
+    /**
+     * Largest cell Peclet number q dz / (theta_m D_m) (dimensionless) the grid is refined to,
+     * within the cell limit; the central scheme needs at most 2 to stay free of wiggles, and the
+     * default 0.25 keeps the grid error of a Peclet-100 layer near 0.1 % in pore volumes to 1e-4.
+     */
+    public double maximumCellPeclet() {
+        return maximumCellPeclet;
     }
 
     /** First time step, pore volumes (dimensionless). */
@@ -165,17 +181,19 @@ public final class SolverSettings {
     @Override
     public String toString() {
         return "SolverSettings[cells/layer >= " + minimumCellsPerLayer + ", dz <= " + maximumCellSizeMetres
-                + " m, cells <= " + maximumCellCount + ", " + advectionScheme + ", steps " + minimumStepPoreVolumes
+                + " m, cells <= " + maximumCellCount + ", " + advectionScheme + ", cell Peclet <= " + maximumCellPeclet
+                + ", steps " + minimumStepPoreVolumes
                 + ".." + maximumStepPoreVolumes + " PV from " + initialStepPoreVolumes + ", tolerance "
                 + stepTolerance + ", Newton " + newtonRelativeTolerance + "]";
     }
 
     /** Builder for {@link SolverSettings}; {@link #build()} checks every value. */
     public static final class Builder {
-        private int minimumCellsPerLayer = 40;
+        private int minimumCellsPerLayer = 100;
         private double maximumCellSizeMetres = Double.POSITIVE_INFINITY;
         private int maximumCellCount = 20_000;
         private AdvectionScheme advectionScheme = AdvectionScheme.CENTRAL;
+        private double maximumCellPeclet = 0.25;
         private double initialStepPoreVolumes = 1e-4;
         private double minimumStepPoreVolumes = 1e-9;
         private double maximumStepPoreVolumes = 0.05;
@@ -187,7 +205,7 @@ public final class SolverSettings {
         private Builder() {
         }
 
-        /** Fewest cells in any layer (default 40). */
+        /** Fewest cells in any layer (default 100). */
         public Builder minimumCellsPerLayer(int value) {
             minimumCellsPerLayer = value;
             return this;
@@ -208,6 +226,12 @@ public final class SolverSettings {
         /** Advection scheme (default {@link AdvectionScheme#CENTRAL}). */
         public Builder advectionScheme(AdvectionScheme value) {
             advectionScheme = value;
+            return this;
+        }
+
+        /** Largest cell Peclet number the grid is refined to, in (0, 2] (default 0.25). */
+        public Builder maximumCellPeclet(double value) {
+            maximumCellPeclet = value;
             return this;
         }
 
