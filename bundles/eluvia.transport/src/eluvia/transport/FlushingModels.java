@@ -1,0 +1,43 @@
+package eluvia.transport;
+
+import eluvia.transport.internal.FiniteLayerModel;
+import eluvia.transport.internal.PlugFlowModel;
+import eluvia.transport.internal.WellMixedModel;
+
+/**
+ * Factories of the equilibrium flushing solutions for one layer (retardation R, Peclet number P
+ * and decay per pore volume k from {@link LayerTransport}). All three assume linear equilibrium
+ * sorption, a layer initially at a uniform concentration and clean inflow.
+ */
+public final class FlushingModels {
+    private FlushingModels() {
+    }
+
+    /**
+     * Exact finite-layer solution: flux (third-type) inlet, zero-gradient outlet, layer initially
+     * at Ci, clean inflow; the Brenner (1962) series in the initial-value form of van Genuchten and
+     * Alves (1982), with the semi-infinite flux-inlet solution (Lindstrom et al. 1967) plus one
+     * outlet reflection at early times and large P; the maximum residual is found by a profile
+     * search. Decay multiplies every criterion by exp(-k T). Falls back to plug flow when the
+     * Peclet number is infinite (no dispersion).
+     */
+    public static FlushingModel finiteLayer(LayerTransport t) {
+        if (Double.isInfinite(t.peclet())) {
+            return plugFlow(t);
+        }
+        return new FiniteLayerModel(t.retardation(), t.peclet(), t.decayPerPoreVolume());
+    }
+
+    /**
+     * Well-mixed layer (batch flush): C/C0 = exp(-T/R), with decay exp(-(1/R + k) T), the same for
+     * every criterion; the P &rarr; 0 limit of the finite layer (US EPA pump-and-treat guidance).
+     */
+    public static FlushingModel wellMixed(LayerTransport t) {
+        return new WellMixedModel(t.retardation(), t.decayPerPoreVolume());
+    }
+
+    /** Piston displacement: the front moves 1/R layer thicknesses per pore volume; the P &rarr; infinity limit. */
+    public static FlushingModel plugFlow(LayerTransport t) {
+        return new PlugFlowModel(t.retardation(), t.decayPerPoreVolume());
+    }
+}
