@@ -24,6 +24,13 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.FlushingDesign#getCaptureEfficiency <em>Capture Efficiency</em>}</li>
  *   <li>{@link eluvia.site.model.FlushingDesign#getCriterion <em>Criterion</em>}</li>
  *   <li>{@link eluvia.site.model.FlushingDesign#getMaxPoreVolumes <em>Max Pore Volumes</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getSolutionMethod <em>Solution Method</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getNumericalCellCount <em>Numerical Cell Count</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getNumericalRelativeTolerance <em>Numerical Relative Tolerance</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getMonitoringIntervalDays <em>Monitoring Interval Days</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getAmendmentName <em>Amendment Name</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getAmendmentDoseKilogramsPerCubicMetre <em>Amendment Dose Kilograms Per Cubic Metre</em>}</li>
+ *   <li>{@link eluvia.site.model.FlushingDesign#getPriceBook <em>Price Book</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getFlushingDesign()
@@ -211,5 +218,186 @@ public interface FlushingDesign extends EObject {
 	 * @generated
 	 */
 	void setMaxPoreVolumes(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Solution Method</b></em>' attribute.
+	 * The literals are from the enumeration {@link eluvia.site.model.SolutionMethod}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Which solution computes the flushing: equilibrium analytical, two-region nonequilibrium, or numerical.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Solution Method</em>' attribute.
+	 * @see eluvia.site.model.SolutionMethod
+	 * @see #setSolutionMethod(SolutionMethod)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_SolutionMethod()
+	 * @model
+	 * @generated
+	 */
+	SolutionMethod getSolutionMethod();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getSolutionMethod <em>Solution Method</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Solution Method</em>' attribute.
+	 * @see eluvia.site.model.SolutionMethod
+	 * @see #getSolutionMethod()
+	 * @generated
+	 */
+	void setSolutionMethod(SolutionMethod value);
+
+	/**
+	 * Returns the value of the '<em><b>Numerical Cell Count</b></em>' attribute.
+	 * The default value is <code>"200"</code>.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Numerical solution: number of cells over the zone depth (a count).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Numerical Cell Count</em>' attribute.
+	 * @see #setNumericalCellCount(int)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_NumericalCellCount()
+	 * @model default="200"
+	 * @generated
+	 */
+	int getNumericalCellCount();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getNumericalCellCount <em>Numerical Cell Count</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Numerical Cell Count</em>' attribute.
+	 * @see #getNumericalCellCount()
+	 * @generated
+	 */
+	void setNumericalCellCount(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Numerical Relative Tolerance</b></em>' attribute.
+	 * The default value is <code>"1.0E-6"</code>.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Numerical solution: relative accuracy of the time integration, dimensionless.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Numerical Relative Tolerance</em>' attribute.
+	 * @see #setNumericalRelativeTolerance(double)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_NumericalRelativeTolerance()
+	 * @model default="1.0E-6"
+	 * @generated
+	 */
+	double getNumericalRelativeTolerance();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getNumericalRelativeTolerance <em>Numerical Relative Tolerance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Numerical Relative Tolerance</em>' attribute.
+	 * @see #getNumericalRelativeTolerance()
+	 * @generated
+	 */
+	void setNumericalRelativeTolerance(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Monitoring Interval Days</b></em>' attribute.
+	 * The default value is <code>"7"</code>.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Days between effluent samplings during operation.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Monitoring Interval Days</em>' attribute.
+	 * @see #setMonitoringIntervalDays(double)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_MonitoringIntervalDays()
+	 * @model default="7"
+	 * @generated
+	 */
+	double getMonitoringIntervalDays();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getMonitoringIntervalDays <em>Monitoring Interval Days</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Monitoring Interval Days</em>' attribute.
+	 * @see #getMonitoringIntervalDays()
+	 * @generated
+	 */
+	void setMonitoringIntervalDays(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Amendment Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Name of the flushing amendment (surfactant, cosolvent, ...); empty for plain water.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Amendment Name</em>' attribute.
+	 * @see #setAmendmentName(String)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_AmendmentName()
+	 * @model
+	 * @generated
+	 */
+	String getAmendmentName();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getAmendmentName <em>Amendment Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Amendment Name</em>' attribute.
+	 * @see #getAmendmentName()
+	 * @generated
+	 */
+	void setAmendmentName(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Amendment Dose Kilograms Per Cubic Metre</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Amendment dose in kg per m3 of flushing solution; 0 for plain water.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Amendment Dose Kilograms Per Cubic Metre</em>' attribute.
+	 * @see #setAmendmentDoseKilogramsPerCubicMetre(double)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_AmendmentDoseKilogramsPerCubicMetre()
+	 * @model
+	 * @generated
+	 */
+	double getAmendmentDoseKilogramsPerCubicMetre();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getAmendmentDoseKilogramsPerCubicMetre <em>Amendment Dose Kilograms Per Cubic Metre</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Amendment Dose Kilograms Per Cubic Metre</em>' attribute.
+	 * @see #getAmendmentDoseKilogramsPerCubicMetre()
+	 * @generated
+	 */
+	void setAmendmentDoseKilogramsPerCubicMetre(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Price Book</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The price book whose rates cost this alternative.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Price Book</em>' reference.
+	 * @see #setPriceBook(PriceBook)
+	 * @see eluvia.site.model.SitePackage#getFlushingDesign_PriceBook()
+	 * @model
+	 * @generated
+	 */
+	PriceBook getPriceBook();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.FlushingDesign#getPriceBook <em>Price Book</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Price Book</em>' reference.
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	void setPriceBook(PriceBook value);
 
 } // FlushingDesign

@@ -26,6 +26,11 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.Project#getContaminants <em>Contaminants</em>}</li>
  *   <li>{@link eluvia.site.model.Project#getCleanupLevels <em>Cleanup Levels</em>}</li>
  *   <li>{@link eluvia.site.model.Project#getFlushingDesigns <em>Flushing Designs</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getUnitSystem <em>Unit System</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getRevisions <em>Revisions</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getExcavationDesigns <em>Excavation Designs</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getPriceBooks <em>Price Books</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getColumnTests <em>Column Tests</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getProject()
@@ -177,5 +182,93 @@ public interface Project extends EObject {
 	 * @generated
 	 */
 	EList<FlushingDesign> getFlushingDesigns();
+
+	/**
+	 * Returns the value of the '<em><b>Unit System</b></em>' attribute.
+	 * The literals are from the enumeration {@link eluvia.site.model.UnitSystem}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The unit system the user prefers for display and entry. Storage is always SI.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Unit System</em>' attribute.
+	 * @see eluvia.site.model.UnitSystem
+	 * @see #setUnitSystem(UnitSystem)
+	 * @see eluvia.site.model.SitePackage#getProject_UnitSystem()
+	 * @model
+	 * @generated
+	 */
+	UnitSystem getUnitSystem();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getUnitSystem <em>Unit System</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Unit System</em>' attribute.
+	 * @see eluvia.site.model.UnitSystem
+	 * @see #getUnitSystem()
+	 * @generated
+	 */
+	void setUnitSystem(UnitSystem value);
+
+	/**
+	 * Returns the value of the '<em><b>Revisions</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.Revision}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Revision history, oldest first: who changed the project, when and what.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Revisions</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_Revisions()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Revision> getRevisions();
+
+	/**
+	 * Returns the value of the '<em><b>Excavation Designs</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.ExcavationDesign}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The excavation alternatives considered.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Excavation Designs</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_ExcavationDesigns()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<ExcavationDesign> getExcavationDesigns();
+
+	/**
+	 * Returns the value of the '<em><b>Price Books</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.PriceBook}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Price books: unit rates with their sources.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Price Books</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_PriceBooks()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<PriceBook> getPriceBooks();
+
+	/**
+	 * Returns the value of the '<em><b>Column Tests</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.ColumnTest}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Laboratory column tests: measured breakthrough or elution curves.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Column Tests</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getProject_ColumnTests()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<ColumnTest> getColumnTests();
 
 } // Project

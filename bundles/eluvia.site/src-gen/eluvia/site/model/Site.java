@@ -23,6 +23,10 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.Site#getDescription <em>Description</em>}</li>
  *   <li>{@link eluvia.site.model.Site#getLayers <em>Layers</em>}</li>
  *   <li>{@link eluvia.site.model.Site#getZones <em>Zones</em>}</li>
+ *   <li>{@link eluvia.site.model.Site#getCoordinateFrame <em>Coordinate Frame</em>}</li>
+ *   <li>{@link eluvia.site.model.Site#getGroundSurfaceElevationMetres <em>Ground Surface Elevation Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.Site#getBoundary <em>Boundary</em>}</li>
+ *   <li>{@link eluvia.site.model.Site#getSamplingLocations <em>Sampling Locations</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getSite()
@@ -109,5 +113,85 @@ public interface Site extends EObject {
 	 * @generated
 	 */
 	EList<TreatmentZone> getZones();
+
+	/**
+	 * Returns the value of the '<em><b>Coordinate Frame</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Description of the local coordinate frame in which eastings and northings are given (origin, orientation, datum), in the user's words. Eastings and northings are in metres.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Coordinate Frame</em>' attribute.
+	 * @see #setCoordinateFrame(String)
+	 * @see eluvia.site.model.SitePackage#getSite_CoordinateFrame()
+	 * @model
+	 * @generated
+	 */
+	String getCoordinateFrame();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Site#getCoordinateFrame <em>Coordinate Frame</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Coordinate Frame</em>' attribute.
+	 * @see #getCoordinateFrame()
+	 * @generated
+	 */
+	void setCoordinateFrame(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Ground Surface Elevation Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Elevation of the ground surface in metres above the datum named in coordinateFrame; depths are measured down from it.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Ground Surface Elevation Metres</em>' attribute.
+	 * @see #setGroundSurfaceElevationMetres(double)
+	 * @see eluvia.site.model.SitePackage#getSite_GroundSurfaceElevationMetres()
+	 * @model
+	 * @generated
+	 */
+	double getGroundSurfaceElevationMetres();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Site#getGroundSurfaceElevationMetres <em>Ground Surface Elevation Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Ground Surface Elevation Metres</em>' attribute.
+	 * @see #getGroundSurfaceElevationMetres()
+	 * @generated
+	 */
+	void setGroundSurfaceElevationMetres(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Boundary</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.Vertex}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Site boundary polygon in the local frame (at least 3 vertices, or none when not drawn).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Boundary</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getSite_Boundary()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Vertex> getBoundary();
+
+	/**
+	 * Returns the value of the '<em><b>Sampling Locations</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.SamplingLocation}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Sampling locations (borings, test pits) with their soil samples.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Sampling Locations</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getSite_SamplingLocations()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<SamplingLocation> getSamplingLocations();
 
 } // Site

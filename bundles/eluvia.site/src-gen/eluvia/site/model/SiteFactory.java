@@ -94,6 +94,87 @@ public interface SiteFactory extends EFactory {
 	FlushingDesign createFlushingDesign();
 
 	/**
+	 * Returns a new object of class '<em>Revision</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Revision</em>'.
+	 * @generated
+	 */
+	Revision createRevision();
+
+	/**
+	 * Returns a new object of class '<em>Vertex</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Vertex</em>'.
+	 * @generated
+	 */
+	Vertex createVertex();
+
+	/**
+	 * Returns a new object of class '<em>Sampling Location</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Sampling Location</em>'.
+	 * @generated
+	 */
+	SamplingLocation createSamplingLocation();
+
+	/**
+	 * Returns a new object of class '<em>Sample</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Sample</em>'.
+	 * @generated
+	 */
+	Sample createSample();
+
+	/**
+	 * Returns a new object of class '<em>Excavation Design</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Excavation Design</em>'.
+	 * @generated
+	 */
+	ExcavationDesign createExcavationDesign();
+
+	/**
+	 * Returns a new object of class '<em>Price Book</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Price Book</em>'.
+	 * @generated
+	 */
+	PriceBook createPriceBook();
+
+	/**
+	 * Returns a new object of class '<em>Price Item</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Price Item</em>'.
+	 * @generated
+	 */
+	PriceItem createPriceItem();
+
+	/**
+	 * Returns a new object of class '<em>Column Test</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Column Test</em>'.
+	 * @generated
+	 */
+	ColumnTest createColumnTest();
+
+	/**
+	 * Returns a new object of class '<em>Column Test Point</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Column Test Point</em>'.
+	 * @generated
+	 */
+	ColumnTestPoint createColumnTestPoint();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

@@ -134,13 +134,58 @@ public interface SitePackage extends EPackage {
 	int PROJECT__FLUSHING_DESIGNS = 6;
 
 	/**
+	 * The feature id for the '<em><b>Unit System</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__UNIT_SYSTEM = 7;
+
+	/**
+	 * The feature id for the '<em><b>Revisions</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__REVISIONS = 8;
+
+	/**
+	 * The feature id for the '<em><b>Excavation Designs</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__EXCAVATION_DESIGNS = 9;
+
+	/**
+	 * The feature id for the '<em><b>Price Books</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__PRICE_BOOKS = 10;
+
+	/**
+	 * The feature id for the '<em><b>Column Tests</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__COLUMN_TESTS = 11;
+
+	/**
 	 * The number of structural features of the '<em>Project</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = 7;
+	int PROJECT_FEATURE_COUNT = 12;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -198,13 +243,49 @@ public interface SitePackage extends EPackage {
 	int SITE__ZONES = 3;
 
 	/**
+	 * The feature id for the '<em><b>Coordinate Frame</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__COORDINATE_FRAME = 4;
+
+	/**
+	 * The feature id for the '<em><b>Ground Surface Elevation Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__GROUND_SURFACE_ELEVATION_METRES = 5;
+
+	/**
+	 * The feature id for the '<em><b>Boundary</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__BOUNDARY = 6;
+
+	/**
+	 * The feature id for the '<em><b>Sampling Locations</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__SAMPLING_LOCATIONS = 7;
+
+	/**
 	 * The number of structural features of the '<em>Site</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int SITE_FEATURE_COUNT = 4;
+	int SITE_FEATURE_COUNT = 8;
 
 	/**
 	 * The number of operations of the '<em>Site</em>' class.
@@ -316,13 +397,58 @@ public interface SitePackage extends EPackage {
 	int SOIL_LAYER__DISPERSIVITY_METRES = 9;
 
 	/**
+	 * The feature id for the '<em><b>Swell Factor</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SOIL_LAYER__SWELL_FACTOR = 10;
+
+	/**
+	 * The feature id for the '<em><b>Shrinkage Factor</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SOIL_LAYER__SHRINKAGE_FACTOR = 11;
+
+	/**
+	 * The feature id for the '<em><b>Dispersivity Rule</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SOIL_LAYER__DISPERSIVITY_RULE = 12;
+
+	/**
+	 * The feature id for the '<em><b>Dispersivity Scale Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SOIL_LAYER__DISPERSIVITY_SCALE_METRES = 13;
+
+	/**
+	 * The feature id for the '<em><b>Effective Dispersivity Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SOIL_LAYER__EFFECTIVE_DISPERSIVITY_METRES = 14;
+
+	/**
 	 * The number of structural features of the '<em>Soil Layer</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int SOIL_LAYER_FEATURE_COUNT = 10;
+	int SOIL_LAYER_FEATURE_COUNT = 15;
 
 	/**
 	 * The number of operations of the '<em>Soil Layer</em>' class.
@@ -407,13 +533,130 @@ public interface SitePackage extends EPackage {
 	int CONTAMINANT__HALF_LIFE_DAYS = 6;
 
 	/**
+	 * The feature id for the '<em><b>Isotherm</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__ISOTHERM = 7;
+
+	/**
+	 * The feature id for the '<em><b>Freundlich Kf Mg Per Kg Per Mg Per Litre To N</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__FREUNDLICH_KF_MG_PER_KG_PER_MG_PER_LITRE_TO_N = 8;
+
+	/**
+	 * The feature id for the '<em><b>Freundlich Exponent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__FREUNDLICH_EXPONENT = 9;
+
+	/**
+	 * The feature id for the '<em><b>Langmuir Maximum Milligrams Per Kg</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__LANGMUIR_MAXIMUM_MILLIGRAMS_PER_KG = 10;
+
+	/**
+	 * The feature id for the '<em><b>Langmuir Constant Litres Per Milligram</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__LANGMUIR_CONSTANT_LITRES_PER_MILLIGRAM = 11;
+
+	/**
+	 * The feature id for the '<em><b>Water Solubility Milligrams Per Litre</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__WATER_SOLUBILITY_MILLIGRAMS_PER_LITRE = 12;
+
+	/**
+	 * The feature id for the '<em><b>Nonequilibrium</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__NONEQUILIBRIUM = 13;
+
+	/**
+	 * The feature id for the '<em><b>Beta</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__BETA = 14;
+
+	/**
+	 * The feature id for the '<em><b>Omega</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__OMEGA = 15;
+
+	/**
+	 * The feature id for the '<em><b>Mobile Water Fraction</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__MOBILE_WATER_FRACTION = 16;
+
+	/**
+	 * The feature id for the '<em><b>Mobile Site Fraction</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__MOBILE_SITE_FRACTION = 17;
+
+	/**
+	 * The feature id for the '<em><b>Mass Transfer Rate Per Day</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__MASS_TRANSFER_RATE_PER_DAY = 18;
+
+	/**
+	 * The feature id for the '<em><b>Property Source</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTAMINANT__PROPERTY_SOURCE = 19;
+
+	/**
 	 * The number of structural features of the '<em>Contaminant</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int CONTAMINANT_FEATURE_COUNT = 7;
+	int CONTAMINANT_FEATURE_COUNT = 20;
 
 	/**
 	 * The number of operations of the '<em>Contaminant</em>' class.
@@ -462,13 +705,49 @@ public interface SitePackage extends EPackage {
 	int CLEANUP_LEVEL__BASIS = 2;
 
 	/**
+	 * The feature id for the '<em><b>Soil Level Entered</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CLEANUP_LEVEL__SOIL_LEVEL_ENTERED = 3;
+
+	/**
+	 * The feature id for the '<em><b>Porewater Level Entered</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED = 4;
+
+	/**
+	 * The feature id for the '<em><b>Porewater Level Milligrams Per Litre</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE = 5;
+
+	/**
+	 * The feature id for the '<em><b>Statistic</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CLEANUP_LEVEL__STATISTIC = 6;
+
+	/**
 	 * The number of structural features of the '<em>Cleanup Level</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int CLEANUP_LEVEL_FEATURE_COUNT = 3;
+	int CLEANUP_LEVEL_FEATURE_COUNT = 7;
 
 	/**
 	 * The number of operations of the '<em>Cleanup Level</em>' class.
@@ -535,13 +814,49 @@ public interface SitePackage extends EPackage {
 	int TREATMENT_ZONE__SOURCE_CONCENTRATIONS = 4;
 
 	/**
+	 * The feature id for the '<em><b>Footprint</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int TREATMENT_ZONE__FOOTPRINT = 5;
+
+	/**
+	 * The feature id for the '<em><b>Effective Area Square Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int TREATMENT_ZONE__EFFECTIVE_AREA_SQUARE_METRES = 6;
+
+	/**
+	 * The feature id for the '<em><b>Volume Cubic Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int TREATMENT_ZONE__VOLUME_CUBIC_METRES = 7;
+
+	/**
+	 * The feature id for the '<em><b>Pore Volume Cubic Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int TREATMENT_ZONE__PORE_VOLUME_CUBIC_METRES = 8;
+
+	/**
 	 * The number of structural features of the '<em>Treatment Zone</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int TREATMENT_ZONE_FEATURE_COUNT = 5;
+	int TREATMENT_ZONE_FEATURE_COUNT = 9;
 
 	/**
 	 * The number of operations of the '<em>Treatment Zone</em>' class.
@@ -672,13 +987,76 @@ public interface SitePackage extends EPackage {
 	int FLUSHING_DESIGN__MAX_PORE_VOLUMES = 6;
 
 	/**
+	 * The feature id for the '<em><b>Solution Method</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__SOLUTION_METHOD = 7;
+
+	/**
+	 * The feature id for the '<em><b>Numerical Cell Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__NUMERICAL_CELL_COUNT = 8;
+
+	/**
+	 * The feature id for the '<em><b>Numerical Relative Tolerance</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE = 9;
+
+	/**
+	 * The feature id for the '<em><b>Monitoring Interval Days</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS = 10;
+
+	/**
+	 * The feature id for the '<em><b>Amendment Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__AMENDMENT_NAME = 11;
+
+	/**
+	 * The feature id for the '<em><b>Amendment Dose Kilograms Per Cubic Metre</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE = 12;
+
+	/**
+	 * The feature id for the '<em><b>Price Book</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FLUSHING_DESIGN__PRICE_BOOK = 13;
+
+	/**
 	 * The number of structural features of the '<em>Flushing Design</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int FLUSHING_DESIGN_FEATURE_COUNT = 7;
+	int FLUSHING_DESIGN_FEATURE_COUNT = 14;
 
 	/**
 	 * The number of operations of the '<em>Flushing Design</em>' class.
@@ -690,6 +1068,672 @@ public interface SitePackage extends EPackage {
 	int FLUSHING_DESIGN_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.RevisionImpl <em>Revision</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.RevisionImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getRevision()
+	 * @generated
+	 */
+	int REVISION = 8;
+
+	/**
+	 * The feature id for the '<em><b>Author</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REVISION__AUTHOR = 0;
+
+	/**
+	 * The feature id for the '<em><b>Timestamp</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REVISION__TIMESTAMP = 1;
+
+	/**
+	 * The feature id for the '<em><b>Summary</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REVISION__SUMMARY = 2;
+
+	/**
+	 * The number of structural features of the '<em>Revision</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REVISION_FEATURE_COUNT = 3;
+
+	/**
+	 * The number of operations of the '<em>Revision</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REVISION_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.VertexImpl <em>Vertex</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.VertexImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getVertex()
+	 * @generated
+	 */
+	int VERTEX = 9;
+
+	/**
+	 * The feature id for the '<em><b>Easting Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VERTEX__EASTING_METRES = 0;
+
+	/**
+	 * The feature id for the '<em><b>Northing Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VERTEX__NORTHING_METRES = 1;
+
+	/**
+	 * The number of structural features of the '<em>Vertex</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VERTEX_FEATURE_COUNT = 2;
+
+	/**
+	 * The number of operations of the '<em>Vertex</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VERTEX_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.SamplingLocationImpl <em>Sampling Location</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.SamplingLocationImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getSamplingLocation()
+	 * @generated
+	 */
+	int SAMPLING_LOCATION = 10;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION__NAME = 0;
+
+	/**
+	 * The feature id for the '<em><b>Easting Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION__EASTING_METRES = 1;
+
+	/**
+	 * The feature id for the '<em><b>Northing Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION__NORTHING_METRES = 2;
+
+	/**
+	 * The feature id for the '<em><b>Ground Elevation Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION__GROUND_ELEVATION_METRES = 3;
+
+	/**
+	 * The feature id for the '<em><b>Samples</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION__SAMPLES = 4;
+
+	/**
+	 * The number of structural features of the '<em>Sampling Location</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION_FEATURE_COUNT = 5;
+
+	/**
+	 * The number of operations of the '<em>Sampling Location</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLING_LOCATION_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.SampleImpl <em>Sample</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.SampleImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getSample()
+	 * @generated
+	 */
+	int SAMPLE = 11;
+
+	/**
+	 * The feature id for the '<em><b>Top Depth Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE__TOP_DEPTH_METRES = 0;
+
+	/**
+	 * The feature id for the '<em><b>Bottom Depth Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE__BOTTOM_DEPTH_METRES = 1;
+
+	/**
+	 * The feature id for the '<em><b>Contaminant</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE__CONTAMINANT = 2;
+
+	/**
+	 * The feature id for the '<em><b>Concentration Milligrams Per Kg</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE__CONCENTRATION_MILLIGRAMS_PER_KG = 3;
+
+	/**
+	 * The feature id for the '<em><b>Non Detect</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE__NON_DETECT = 4;
+
+	/**
+	 * The feature id for the '<em><b>Detection Limit Milligrams Per Kg</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE__DETECTION_LIMIT_MILLIGRAMS_PER_KG = 5;
+
+	/**
+	 * The number of structural features of the '<em>Sample</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE_FEATURE_COUNT = 6;
+
+	/**
+	 * The number of operations of the '<em>Sample</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SAMPLE_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.ExcavationDesignImpl <em>Excavation Design</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.ExcavationDesignImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getExcavationDesign()
+	 * @generated
+	 */
+	int EXCAVATION_DESIGN = 12;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__NAME = 0;
+
+	/**
+	 * The feature id for the '<em><b>Zone</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__ZONE = 1;
+
+	/**
+	 * The feature id for the '<em><b>Soil Type</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__SOIL_TYPE = 2;
+
+	/**
+	 * The feature id for the '<em><b>Side Slope Horizontal Per Vertical</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__SIDE_SLOPE_HORIZONTAL_PER_VERTICAL = 3;
+
+	/**
+	 * The feature id for the '<em><b>Overdig Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__OVERDIG_METRES = 4;
+
+	/**
+	 * The feature id for the '<em><b>Truck Heaped Capacity Cubic Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__TRUCK_HEAPED_CAPACITY_CUBIC_METRES = 5;
+
+	/**
+	 * The feature id for the '<em><b>Truck Payload Kilograms</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__TRUCK_PAYLOAD_KILOGRAMS = 6;
+
+	/**
+	 * The feature id for the '<em><b>Price Book</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN__PRICE_BOOK = 7;
+
+	/**
+	 * The number of structural features of the '<em>Excavation Design</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN_FEATURE_COUNT = 8;
+
+	/**
+	 * The number of operations of the '<em>Excavation Design</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXCAVATION_DESIGN_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.PriceBookImpl <em>Price Book</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.PriceBookImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getPriceBook()
+	 * @generated
+	 */
+	int PRICE_BOOK = 13;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__NAME = 0;
+
+	/**
+	 * The feature id for the '<em><b>Currency</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__CURRENCY = 1;
+
+	/**
+	 * The feature id for the '<em><b>Reference</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__REFERENCE = 2;
+
+	/**
+	 * The feature id for the '<em><b>Items</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__ITEMS = 3;
+
+	/**
+	 * The number of structural features of the '<em>Price Book</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK_FEATURE_COUNT = 4;
+
+	/**
+	 * The number of operations of the '<em>Price Book</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.PriceItemImpl <em>Price Item</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.PriceItemImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getPriceItem()
+	 * @generated
+	 */
+	int PRICE_ITEM = 14;
+
+	/**
+	 * The feature id for the '<em><b>Code</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM__CODE = 0;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM__NAME = 1;
+
+	/**
+	 * The feature id for the '<em><b>Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM__UNIT = 2;
+
+	/**
+	 * The feature id for the '<em><b>Rate Per Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM__RATE_PER_UNIT = 3;
+
+	/**
+	 * The feature id for the '<em><b>Currency</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM__CURRENCY = 4;
+
+	/**
+	 * The feature id for the '<em><b>Source Note</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM__SOURCE_NOTE = 5;
+
+	/**
+	 * The number of structural features of the '<em>Price Item</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM_FEATURE_COUNT = 6;
+
+	/**
+	 * The number of operations of the '<em>Price Item</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_ITEM_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.ColumnTestImpl <em>Column Test</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.ColumnTestImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTest()
+	 * @generated
+	 */
+	int COLUMN_TEST = 15;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__NAME = 0;
+
+	/**
+	 * The feature id for the '<em><b>Contaminant</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__CONTAMINANT = 1;
+
+	/**
+	 * The feature id for the '<em><b>Layer</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__LAYER = 2;
+
+	/**
+	 * The feature id for the '<em><b>Kind</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__KIND = 3;
+
+	/**
+	 * The feature id for the '<em><b>Column Length Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__COLUMN_LENGTH_METRES = 4;
+
+	/**
+	 * The feature id for the '<em><b>Darcy Flux Metres Per Day</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__DARCY_FLUX_METRES_PER_DAY = 5;
+
+	/**
+	 * The feature id for the '<em><b>Water Content</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__WATER_CONTENT = 6;
+
+	/**
+	 * The feature id for the '<em><b>Bulk Density Kg Per Cubic Metre</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__BULK_DENSITY_KG_PER_CUBIC_METRE = 7;
+
+	/**
+	 * The feature id for the '<em><b>Reference Concentration Milligrams Per Litre</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__REFERENCE_CONCENTRATION_MILLIGRAMS_PER_LITRE = 8;
+
+	/**
+	 * The feature id for the '<em><b>Points</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST__POINTS = 9;
+
+	/**
+	 * The number of structural features of the '<em>Column Test</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST_FEATURE_COUNT = 10;
+
+	/**
+	 * The number of operations of the '<em>Column Test</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.ColumnTestPointImpl <em>Column Test Point</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.ColumnTestPointImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTestPoint()
+	 * @generated
+	 */
+	int COLUMN_TEST_POINT = 16;
+
+	/**
+	 * The feature id for the '<em><b>Pore Volumes</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST_POINT__PORE_VOLUMES = 0;
+
+	/**
+	 * The feature id for the '<em><b>Relative Concentration</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST_POINT__RELATIVE_CONCENTRATION = 1;
+
+	/**
+	 * The number of structural features of the '<em>Column Test Point</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST_POINT_FEATURE_COUNT = 2;
+
+	/**
+	 * The number of operations of the '<em>Column Test Point</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int COLUMN_TEST_POINT_OPERATION_COUNT = 0;
+
+	/**
 	 * The meta object id for the '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -697,7 +1741,88 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceCriterion()
 	 * @generated
 	 */
-	int COMPLIANCE_CRITERION = 8;
+	int COMPLIANCE_CRITERION = 17;
+
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.UnitSystem <em>Unit System</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.UnitSystem
+	 * @see eluvia.site.model.impl.SitePackageImpl#getUnitSystem()
+	 * @generated
+	 */
+	int UNIT_SYSTEM = 18;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.DispersivityRule <em>Dispersivity Rule</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.DispersivityRule
+	 * @see eluvia.site.model.impl.SitePackageImpl#getDispersivityRule()
+	 * @generated
+	 */
+	int DISPERSIVITY_RULE = 19;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.SorptionIsotherm <em>Sorption Isotherm</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.SorptionIsotherm
+	 * @see eluvia.site.model.impl.SitePackageImpl#getSorptionIsotherm()
+	 * @generated
+	 */
+	int SORPTION_ISOTHERM = 20;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.NonequilibriumEntry <em>Nonequilibrium Entry</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.NonequilibriumEntry
+	 * @see eluvia.site.model.impl.SitePackageImpl#getNonequilibriumEntry()
+	 * @generated
+	 */
+	int NONEQUILIBRIUM_ENTRY = 21;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.ComplianceStatistic <em>Compliance Statistic</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.ComplianceStatistic
+	 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceStatistic()
+	 * @generated
+	 */
+	int COMPLIANCE_STATISTIC = 22;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.SolutionMethod <em>Solution Method</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.SolutionMethod
+	 * @see eluvia.site.model.impl.SitePackageImpl#getSolutionMethod()
+	 * @generated
+	 */
+	int SOLUTION_METHOD = 23;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.ExcavationSoilType <em>Excavation Soil Type</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.ExcavationSoilType
+	 * @see eluvia.site.model.impl.SitePackageImpl#getExcavationSoilType()
+	 * @generated
+	 */
+	int EXCAVATION_SOIL_TYPE = 24;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.ColumnTestKind <em>Column Test Kind</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.ColumnTestKind
+	 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTestKind()
+	 * @generated
+	 */
+	int COLUMN_TEST_KIND = 25;
 
 
 	/**
@@ -788,6 +1913,61 @@ public interface SitePackage extends EPackage {
 	EReference getProject_FlushingDesigns();
 
 	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Project#getUnitSystem <em>Unit System</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit System</em>'.
+	 * @see eluvia.site.model.Project#getUnitSystem()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EAttribute getProject_UnitSystem();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.Project#getRevisions <em>Revisions</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Revisions</em>'.
+	 * @see eluvia.site.model.Project#getRevisions()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Revisions();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.Project#getExcavationDesigns <em>Excavation Designs</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Excavation Designs</em>'.
+	 * @see eluvia.site.model.Project#getExcavationDesigns()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_ExcavationDesigns();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.Project#getPriceBooks <em>Price Books</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Price Books</em>'.
+	 * @see eluvia.site.model.Project#getPriceBooks()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_PriceBooks();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.Project#getColumnTests <em>Column Tests</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Column Tests</em>'.
+	 * @see eluvia.site.model.Project#getColumnTests()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_ColumnTests();
+
+	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.Site <em>Site</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -840,6 +2020,50 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getSite_Zones();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Site#getCoordinateFrame <em>Coordinate Frame</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Coordinate Frame</em>'.
+	 * @see eluvia.site.model.Site#getCoordinateFrame()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EAttribute getSite_CoordinateFrame();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Site#getGroundSurfaceElevationMetres <em>Ground Surface Elevation Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Ground Surface Elevation Metres</em>'.
+	 * @see eluvia.site.model.Site#getGroundSurfaceElevationMetres()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EAttribute getSite_GroundSurfaceElevationMetres();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.Site#getBoundary <em>Boundary</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Boundary</em>'.
+	 * @see eluvia.site.model.Site#getBoundary()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EReference getSite_Boundary();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.Site#getSamplingLocations <em>Sampling Locations</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Sampling Locations</em>'.
+	 * @see eluvia.site.model.Site#getSamplingLocations()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EReference getSite_SamplingLocations();
 
 	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.SoilLayer <em>Soil Layer</em>}'.
@@ -962,6 +2186,61 @@ public interface SitePackage extends EPackage {
 	EAttribute getSoilLayer_DispersivityMetres();
 
 	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SoilLayer#getSwellFactor <em>Swell Factor</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Swell Factor</em>'.
+	 * @see eluvia.site.model.SoilLayer#getSwellFactor()
+	 * @see #getSoilLayer()
+	 * @generated
+	 */
+	EAttribute getSoilLayer_SwellFactor();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SoilLayer#getShrinkageFactor <em>Shrinkage Factor</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Shrinkage Factor</em>'.
+	 * @see eluvia.site.model.SoilLayer#getShrinkageFactor()
+	 * @see #getSoilLayer()
+	 * @generated
+	 */
+	EAttribute getSoilLayer_ShrinkageFactor();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SoilLayer#getDispersivityRule <em>Dispersivity Rule</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Dispersivity Rule</em>'.
+	 * @see eluvia.site.model.SoilLayer#getDispersivityRule()
+	 * @see #getSoilLayer()
+	 * @generated
+	 */
+	EAttribute getSoilLayer_DispersivityRule();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SoilLayer#getDispersivityScaleMetres <em>Dispersivity Scale Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Dispersivity Scale Metres</em>'.
+	 * @see eluvia.site.model.SoilLayer#getDispersivityScaleMetres()
+	 * @see #getSoilLayer()
+	 * @generated
+	 */
+	EAttribute getSoilLayer_DispersivityScaleMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SoilLayer#getEffectiveDispersivityMetres <em>Effective Dispersivity Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Effective Dispersivity Metres</em>'.
+	 * @see eluvia.site.model.SoilLayer#getEffectiveDispersivityMetres()
+	 * @see #getSoilLayer()
+	 * @generated
+	 */
+	EAttribute getSoilLayer_EffectiveDispersivityMetres();
+
+	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.Contaminant <em>Contaminant</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1049,6 +2328,149 @@ public interface SitePackage extends EPackage {
 	EAttribute getContaminant_HalfLifeDays();
 
 	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getIsotherm <em>Isotherm</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Isotherm</em>'.
+	 * @see eluvia.site.model.Contaminant#getIsotherm()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_Isotherm();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getFreundlichKfMgPerKgPerMgPerLitreToN <em>Freundlich Kf Mg Per Kg Per Mg Per Litre To N</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Freundlich Kf Mg Per Kg Per Mg Per Litre To N</em>'.
+	 * @see eluvia.site.model.Contaminant#getFreundlichKfMgPerKgPerMgPerLitreToN()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_FreundlichKfMgPerKgPerMgPerLitreToN();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getFreundlichExponent <em>Freundlich Exponent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Freundlich Exponent</em>'.
+	 * @see eluvia.site.model.Contaminant#getFreundlichExponent()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_FreundlichExponent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getLangmuirMaximumMilligramsPerKg <em>Langmuir Maximum Milligrams Per Kg</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Langmuir Maximum Milligrams Per Kg</em>'.
+	 * @see eluvia.site.model.Contaminant#getLangmuirMaximumMilligramsPerKg()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_LangmuirMaximumMilligramsPerKg();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getLangmuirConstantLitresPerMilligram <em>Langmuir Constant Litres Per Milligram</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Langmuir Constant Litres Per Milligram</em>'.
+	 * @see eluvia.site.model.Contaminant#getLangmuirConstantLitresPerMilligram()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_LangmuirConstantLitresPerMilligram();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getWaterSolubilityMilligramsPerLitre <em>Water Solubility Milligrams Per Litre</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Water Solubility Milligrams Per Litre</em>'.
+	 * @see eluvia.site.model.Contaminant#getWaterSolubilityMilligramsPerLitre()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_WaterSolubilityMilligramsPerLitre();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getNonequilibrium <em>Nonequilibrium</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Nonequilibrium</em>'.
+	 * @see eluvia.site.model.Contaminant#getNonequilibrium()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_Nonequilibrium();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getBeta <em>Beta</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Beta</em>'.
+	 * @see eluvia.site.model.Contaminant#getBeta()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_Beta();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getOmega <em>Omega</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Omega</em>'.
+	 * @see eluvia.site.model.Contaminant#getOmega()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_Omega();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getMobileWaterFraction <em>Mobile Water Fraction</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Mobile Water Fraction</em>'.
+	 * @see eluvia.site.model.Contaminant#getMobileWaterFraction()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_MobileWaterFraction();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getMobileSiteFraction <em>Mobile Site Fraction</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Mobile Site Fraction</em>'.
+	 * @see eluvia.site.model.Contaminant#getMobileSiteFraction()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_MobileSiteFraction();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getMassTransferRatePerDay <em>Mass Transfer Rate Per Day</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Mass Transfer Rate Per Day</em>'.
+	 * @see eluvia.site.model.Contaminant#getMassTransferRatePerDay()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_MassTransferRatePerDay();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Contaminant#getPropertySource <em>Property Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Property Source</em>'.
+	 * @see eluvia.site.model.Contaminant#getPropertySource()
+	 * @see #getContaminant()
+	 * @generated
+	 */
+	EAttribute getContaminant_PropertySource();
+
+	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.CleanupLevel <em>Cleanup Level</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1090,6 +2512,50 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getCleanupLevel_Basis();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.CleanupLevel#isSoilLevelEntered <em>Soil Level Entered</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Soil Level Entered</em>'.
+	 * @see eluvia.site.model.CleanupLevel#isSoilLevelEntered()
+	 * @see #getCleanupLevel()
+	 * @generated
+	 */
+	EAttribute getCleanupLevel_SoilLevelEntered();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.CleanupLevel#isPorewaterLevelEntered <em>Porewater Level Entered</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Porewater Level Entered</em>'.
+	 * @see eluvia.site.model.CleanupLevel#isPorewaterLevelEntered()
+	 * @see #getCleanupLevel()
+	 * @generated
+	 */
+	EAttribute getCleanupLevel_PorewaterLevelEntered();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.CleanupLevel#getPorewaterLevelMilligramsPerLitre <em>Porewater Level Milligrams Per Litre</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Porewater Level Milligrams Per Litre</em>'.
+	 * @see eluvia.site.model.CleanupLevel#getPorewaterLevelMilligramsPerLitre()
+	 * @see #getCleanupLevel()
+	 * @generated
+	 */
+	EAttribute getCleanupLevel_PorewaterLevelMilligramsPerLitre();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.CleanupLevel#getStatistic <em>Statistic</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Statistic</em>'.
+	 * @see eluvia.site.model.CleanupLevel#getStatistic()
+	 * @see #getCleanupLevel()
+	 * @generated
+	 */
+	EAttribute getCleanupLevel_Statistic();
 
 	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.TreatmentZone <em>Treatment Zone</em>}'.
@@ -1155,6 +2621,50 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getTreatmentZone_SourceConcentrations();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.TreatmentZone#getFootprint <em>Footprint</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Footprint</em>'.
+	 * @see eluvia.site.model.TreatmentZone#getFootprint()
+	 * @see #getTreatmentZone()
+	 * @generated
+	 */
+	EReference getTreatmentZone_Footprint();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.TreatmentZone#getEffectiveAreaSquareMetres <em>Effective Area Square Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Effective Area Square Metres</em>'.
+	 * @see eluvia.site.model.TreatmentZone#getEffectiveAreaSquareMetres()
+	 * @see #getTreatmentZone()
+	 * @generated
+	 */
+	EAttribute getTreatmentZone_EffectiveAreaSquareMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.TreatmentZone#getVolumeCubicMetres <em>Volume Cubic Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Volume Cubic Metres</em>'.
+	 * @see eluvia.site.model.TreatmentZone#getVolumeCubicMetres()
+	 * @see #getTreatmentZone()
+	 * @generated
+	 */
+	EAttribute getTreatmentZone_VolumeCubicMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.TreatmentZone#getPoreVolumeCubicMetres <em>Pore Volume Cubic Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Pore Volume Cubic Metres</em>'.
+	 * @see eluvia.site.model.TreatmentZone#getPoreVolumeCubicMetres()
+	 * @see #getTreatmentZone()
+	 * @generated
+	 */
+	EAttribute getTreatmentZone_PoreVolumeCubicMetres();
 
 	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.SourceConcentration <em>Source Concentration</em>}'.
@@ -1276,6 +2786,679 @@ public interface SitePackage extends EPackage {
 	EAttribute getFlushingDesign_MaxPoreVolumes();
 
 	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.FlushingDesign#getSolutionMethod <em>Solution Method</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Solution Method</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getSolutionMethod()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EAttribute getFlushingDesign_SolutionMethod();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.FlushingDesign#getNumericalCellCount <em>Numerical Cell Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Numerical Cell Count</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getNumericalCellCount()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EAttribute getFlushingDesign_NumericalCellCount();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.FlushingDesign#getNumericalRelativeTolerance <em>Numerical Relative Tolerance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Numerical Relative Tolerance</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getNumericalRelativeTolerance()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EAttribute getFlushingDesign_NumericalRelativeTolerance();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.FlushingDesign#getMonitoringIntervalDays <em>Monitoring Interval Days</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Monitoring Interval Days</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getMonitoringIntervalDays()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EAttribute getFlushingDesign_MonitoringIntervalDays();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.FlushingDesign#getAmendmentName <em>Amendment Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Amendment Name</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getAmendmentName()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EAttribute getFlushingDesign_AmendmentName();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.FlushingDesign#getAmendmentDoseKilogramsPerCubicMetre <em>Amendment Dose Kilograms Per Cubic Metre</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Amendment Dose Kilograms Per Cubic Metre</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getAmendmentDoseKilogramsPerCubicMetre()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EAttribute getFlushingDesign_AmendmentDoseKilogramsPerCubicMetre();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.FlushingDesign#getPriceBook <em>Price Book</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Price Book</em>'.
+	 * @see eluvia.site.model.FlushingDesign#getPriceBook()
+	 * @see #getFlushingDesign()
+	 * @generated
+	 */
+	EReference getFlushingDesign_PriceBook();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.Revision <em>Revision</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Revision</em>'.
+	 * @see eluvia.site.model.Revision
+	 * @generated
+	 */
+	EClass getRevision();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Revision#getAuthor <em>Author</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Author</em>'.
+	 * @see eluvia.site.model.Revision#getAuthor()
+	 * @see #getRevision()
+	 * @generated
+	 */
+	EAttribute getRevision_Author();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Revision#getTimestamp <em>Timestamp</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Timestamp</em>'.
+	 * @see eluvia.site.model.Revision#getTimestamp()
+	 * @see #getRevision()
+	 * @generated
+	 */
+	EAttribute getRevision_Timestamp();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Revision#getSummary <em>Summary</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Summary</em>'.
+	 * @see eluvia.site.model.Revision#getSummary()
+	 * @see #getRevision()
+	 * @generated
+	 */
+	EAttribute getRevision_Summary();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.Vertex <em>Vertex</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Vertex</em>'.
+	 * @see eluvia.site.model.Vertex
+	 * @generated
+	 */
+	EClass getVertex();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Vertex#getEastingMetres <em>Easting Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Easting Metres</em>'.
+	 * @see eluvia.site.model.Vertex#getEastingMetres()
+	 * @see #getVertex()
+	 * @generated
+	 */
+	EAttribute getVertex_EastingMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Vertex#getNorthingMetres <em>Northing Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Northing Metres</em>'.
+	 * @see eluvia.site.model.Vertex#getNorthingMetres()
+	 * @see #getVertex()
+	 * @generated
+	 */
+	EAttribute getVertex_NorthingMetres();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.SamplingLocation <em>Sampling Location</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Sampling Location</em>'.
+	 * @see eluvia.site.model.SamplingLocation
+	 * @generated
+	 */
+	EClass getSamplingLocation();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SamplingLocation#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see eluvia.site.model.SamplingLocation#getName()
+	 * @see #getSamplingLocation()
+	 * @generated
+	 */
+	EAttribute getSamplingLocation_Name();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SamplingLocation#getEastingMetres <em>Easting Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Easting Metres</em>'.
+	 * @see eluvia.site.model.SamplingLocation#getEastingMetres()
+	 * @see #getSamplingLocation()
+	 * @generated
+	 */
+	EAttribute getSamplingLocation_EastingMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SamplingLocation#getNorthingMetres <em>Northing Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Northing Metres</em>'.
+	 * @see eluvia.site.model.SamplingLocation#getNorthingMetres()
+	 * @see #getSamplingLocation()
+	 * @generated
+	 */
+	EAttribute getSamplingLocation_NorthingMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.SamplingLocation#getGroundElevationMetres <em>Ground Elevation Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Ground Elevation Metres</em>'.
+	 * @see eluvia.site.model.SamplingLocation#getGroundElevationMetres()
+	 * @see #getSamplingLocation()
+	 * @generated
+	 */
+	EAttribute getSamplingLocation_GroundElevationMetres();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.SamplingLocation#getSamples <em>Samples</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Samples</em>'.
+	 * @see eluvia.site.model.SamplingLocation#getSamples()
+	 * @see #getSamplingLocation()
+	 * @generated
+	 */
+	EReference getSamplingLocation_Samples();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.Sample <em>Sample</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Sample</em>'.
+	 * @see eluvia.site.model.Sample
+	 * @generated
+	 */
+	EClass getSample();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Sample#getTopDepthMetres <em>Top Depth Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Top Depth Metres</em>'.
+	 * @see eluvia.site.model.Sample#getTopDepthMetres()
+	 * @see #getSample()
+	 * @generated
+	 */
+	EAttribute getSample_TopDepthMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Sample#getBottomDepthMetres <em>Bottom Depth Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Bottom Depth Metres</em>'.
+	 * @see eluvia.site.model.Sample#getBottomDepthMetres()
+	 * @see #getSample()
+	 * @generated
+	 */
+	EAttribute getSample_BottomDepthMetres();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.Sample#getContaminant <em>Contaminant</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Contaminant</em>'.
+	 * @see eluvia.site.model.Sample#getContaminant()
+	 * @see #getSample()
+	 * @generated
+	 */
+	EReference getSample_Contaminant();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Sample#getConcentrationMilligramsPerKg <em>Concentration Milligrams Per Kg</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Concentration Milligrams Per Kg</em>'.
+	 * @see eluvia.site.model.Sample#getConcentrationMilligramsPerKg()
+	 * @see #getSample()
+	 * @generated
+	 */
+	EAttribute getSample_ConcentrationMilligramsPerKg();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Sample#isNonDetect <em>Non Detect</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Non Detect</em>'.
+	 * @see eluvia.site.model.Sample#isNonDetect()
+	 * @see #getSample()
+	 * @generated
+	 */
+	EAttribute getSample_NonDetect();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.Sample#getDetectionLimitMilligramsPerKg <em>Detection Limit Milligrams Per Kg</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Detection Limit Milligrams Per Kg</em>'.
+	 * @see eluvia.site.model.Sample#getDetectionLimitMilligramsPerKg()
+	 * @see #getSample()
+	 * @generated
+	 */
+	EAttribute getSample_DetectionLimitMilligramsPerKg();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.ExcavationDesign <em>Excavation Design</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Excavation Design</em>'.
+	 * @see eluvia.site.model.ExcavationDesign
+	 * @generated
+	 */
+	EClass getExcavationDesign();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ExcavationDesign#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getName()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EAttribute getExcavationDesign_Name();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.ExcavationDesign#getZone <em>Zone</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Zone</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getZone()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EReference getExcavationDesign_Zone();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ExcavationDesign#getSoilType <em>Soil Type</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Soil Type</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getSoilType()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EAttribute getExcavationDesign_SoilType();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ExcavationDesign#getSideSlopeHorizontalPerVertical <em>Side Slope Horizontal Per Vertical</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Side Slope Horizontal Per Vertical</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getSideSlopeHorizontalPerVertical()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EAttribute getExcavationDesign_SideSlopeHorizontalPerVertical();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ExcavationDesign#getOverdigMetres <em>Overdig Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Overdig Metres</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getOverdigMetres()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EAttribute getExcavationDesign_OverdigMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ExcavationDesign#getTruckHeapedCapacityCubicMetres <em>Truck Heaped Capacity Cubic Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Truck Heaped Capacity Cubic Metres</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getTruckHeapedCapacityCubicMetres()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EAttribute getExcavationDesign_TruckHeapedCapacityCubicMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ExcavationDesign#getTruckPayloadKilograms <em>Truck Payload Kilograms</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Truck Payload Kilograms</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getTruckPayloadKilograms()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EAttribute getExcavationDesign_TruckPayloadKilograms();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.ExcavationDesign#getPriceBook <em>Price Book</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Price Book</em>'.
+	 * @see eluvia.site.model.ExcavationDesign#getPriceBook()
+	 * @see #getExcavationDesign()
+	 * @generated
+	 */
+	EReference getExcavationDesign_PriceBook();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.PriceBook <em>Price Book</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Price Book</em>'.
+	 * @see eluvia.site.model.PriceBook
+	 * @generated
+	 */
+	EClass getPriceBook();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see eluvia.site.model.PriceBook#getName()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_Name();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getCurrency <em>Currency</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Currency</em>'.
+	 * @see eluvia.site.model.PriceBook#getCurrency()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_Currency();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getReference <em>Reference</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Reference</em>'.
+	 * @see eluvia.site.model.PriceBook#getReference()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_Reference();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.PriceBook#getItems <em>Items</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Items</em>'.
+	 * @see eluvia.site.model.PriceBook#getItems()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EReference getPriceBook_Items();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.PriceItem <em>Price Item</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Price Item</em>'.
+	 * @see eluvia.site.model.PriceItem
+	 * @generated
+	 */
+	EClass getPriceItem();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceItem#getCode <em>Code</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Code</em>'.
+	 * @see eluvia.site.model.PriceItem#getCode()
+	 * @see #getPriceItem()
+	 * @generated
+	 */
+	EAttribute getPriceItem_Code();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceItem#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see eluvia.site.model.PriceItem#getName()
+	 * @see #getPriceItem()
+	 * @generated
+	 */
+	EAttribute getPriceItem_Name();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceItem#getUnit <em>Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit</em>'.
+	 * @see eluvia.site.model.PriceItem#getUnit()
+	 * @see #getPriceItem()
+	 * @generated
+	 */
+	EAttribute getPriceItem_Unit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceItem#getRatePerUnit <em>Rate Per Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Rate Per Unit</em>'.
+	 * @see eluvia.site.model.PriceItem#getRatePerUnit()
+	 * @see #getPriceItem()
+	 * @generated
+	 */
+	EAttribute getPriceItem_RatePerUnit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceItem#getCurrency <em>Currency</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Currency</em>'.
+	 * @see eluvia.site.model.PriceItem#getCurrency()
+	 * @see #getPriceItem()
+	 * @generated
+	 */
+	EAttribute getPriceItem_Currency();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceItem#getSourceNote <em>Source Note</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source Note</em>'.
+	 * @see eluvia.site.model.PriceItem#getSourceNote()
+	 * @see #getPriceItem()
+	 * @generated
+	 */
+	EAttribute getPriceItem_SourceNote();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.ColumnTest <em>Column Test</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Column Test</em>'.
+	 * @see eluvia.site.model.ColumnTest
+	 * @generated
+	 */
+	EClass getColumnTest();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see eluvia.site.model.ColumnTest#getName()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_Name();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.ColumnTest#getContaminant <em>Contaminant</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Contaminant</em>'.
+	 * @see eluvia.site.model.ColumnTest#getContaminant()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EReference getColumnTest_Contaminant();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.ColumnTest#getLayer <em>Layer</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Layer</em>'.
+	 * @see eluvia.site.model.ColumnTest#getLayer()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EReference getColumnTest_Layer();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getKind <em>Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Kind</em>'.
+	 * @see eluvia.site.model.ColumnTest#getKind()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_Kind();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getColumnLengthMetres <em>Column Length Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Column Length Metres</em>'.
+	 * @see eluvia.site.model.ColumnTest#getColumnLengthMetres()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_ColumnLengthMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getDarcyFluxMetresPerDay <em>Darcy Flux Metres Per Day</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Darcy Flux Metres Per Day</em>'.
+	 * @see eluvia.site.model.ColumnTest#getDarcyFluxMetresPerDay()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_DarcyFluxMetresPerDay();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getWaterContent <em>Water Content</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Water Content</em>'.
+	 * @see eluvia.site.model.ColumnTest#getWaterContent()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_WaterContent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getBulkDensityKgPerCubicMetre <em>Bulk Density Kg Per Cubic Metre</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Bulk Density Kg Per Cubic Metre</em>'.
+	 * @see eluvia.site.model.ColumnTest#getBulkDensityKgPerCubicMetre()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_BulkDensityKgPerCubicMetre();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTest#getReferenceConcentrationMilligramsPerLitre <em>Reference Concentration Milligrams Per Litre</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Reference Concentration Milligrams Per Litre</em>'.
+	 * @see eluvia.site.model.ColumnTest#getReferenceConcentrationMilligramsPerLitre()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EAttribute getColumnTest_ReferenceConcentrationMilligramsPerLitre();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.ColumnTest#getPoints <em>Points</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Points</em>'.
+	 * @see eluvia.site.model.ColumnTest#getPoints()
+	 * @see #getColumnTest()
+	 * @generated
+	 */
+	EReference getColumnTest_Points();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.ColumnTestPoint <em>Column Test Point</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Column Test Point</em>'.
+	 * @see eluvia.site.model.ColumnTestPoint
+	 * @generated
+	 */
+	EClass getColumnTestPoint();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTestPoint#getPoreVolumes <em>Pore Volumes</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Pore Volumes</em>'.
+	 * @see eluvia.site.model.ColumnTestPoint#getPoreVolumes()
+	 * @see #getColumnTestPoint()
+	 * @generated
+	 */
+	EAttribute getColumnTestPoint_PoreVolumes();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ColumnTestPoint#getRelativeConcentration <em>Relative Concentration</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Relative Concentration</em>'.
+	 * @see eluvia.site.model.ColumnTestPoint#getRelativeConcentration()
+	 * @see #getColumnTestPoint()
+	 * @generated
+	 */
+	EAttribute getColumnTestPoint_RelativeConcentration();
+
+	/**
 	 * Returns the meta object for enum '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1284,6 +3467,86 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EEnum getComplianceCriterion();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.UnitSystem <em>Unit System</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Unit System</em>'.
+	 * @see eluvia.site.model.UnitSystem
+	 * @generated
+	 */
+	EEnum getUnitSystem();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.DispersivityRule <em>Dispersivity Rule</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Dispersivity Rule</em>'.
+	 * @see eluvia.site.model.DispersivityRule
+	 * @generated
+	 */
+	EEnum getDispersivityRule();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.SorptionIsotherm <em>Sorption Isotherm</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Sorption Isotherm</em>'.
+	 * @see eluvia.site.model.SorptionIsotherm
+	 * @generated
+	 */
+	EEnum getSorptionIsotherm();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.NonequilibriumEntry <em>Nonequilibrium Entry</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Nonequilibrium Entry</em>'.
+	 * @see eluvia.site.model.NonequilibriumEntry
+	 * @generated
+	 */
+	EEnum getNonequilibriumEntry();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.ComplianceStatistic <em>Compliance Statistic</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Compliance Statistic</em>'.
+	 * @see eluvia.site.model.ComplianceStatistic
+	 * @generated
+	 */
+	EEnum getComplianceStatistic();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.SolutionMethod <em>Solution Method</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Solution Method</em>'.
+	 * @see eluvia.site.model.SolutionMethod
+	 * @generated
+	 */
+	EEnum getSolutionMethod();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.ExcavationSoilType <em>Excavation Soil Type</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Excavation Soil Type</em>'.
+	 * @see eluvia.site.model.ExcavationSoilType
+	 * @generated
+	 */
+	EEnum getExcavationSoilType();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.ColumnTestKind <em>Column Test Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Column Test Kind</em>'.
+	 * @see eluvia.site.model.ColumnTestKind
+	 * @generated
+	 */
+	EEnum getColumnTestKind();
 
 	/**
 	 * Returns the factory that creates the instances of the model.
@@ -1375,6 +3638,46 @@ public interface SitePackage extends EPackage {
 		EReference PROJECT__FLUSHING_DESIGNS = eINSTANCE.getProject_FlushingDesigns();
 
 		/**
+		 * The meta object literal for the '<em><b>Unit System</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROJECT__UNIT_SYSTEM = eINSTANCE.getProject_UnitSystem();
+
+		/**
+		 * The meta object literal for the '<em><b>Revisions</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__REVISIONS = eINSTANCE.getProject_Revisions();
+
+		/**
+		 * The meta object literal for the '<em><b>Excavation Designs</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__EXCAVATION_DESIGNS = eINSTANCE.getProject_ExcavationDesigns();
+
+		/**
+		 * The meta object literal for the '<em><b>Price Books</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__PRICE_BOOKS = eINSTANCE.getProject_PriceBooks();
+
+		/**
+		 * The meta object literal for the '<em><b>Column Tests</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__COLUMN_TESTS = eINSTANCE.getProject_ColumnTests();
+
+		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.SiteImpl <em>Site</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -1415,6 +3718,38 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EReference SITE__ZONES = eINSTANCE.getSite_Zones();
+
+		/**
+		 * The meta object literal for the '<em><b>Coordinate Frame</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SITE__COORDINATE_FRAME = eINSTANCE.getSite_CoordinateFrame();
+
+		/**
+		 * The meta object literal for the '<em><b>Ground Surface Elevation Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SITE__GROUND_SURFACE_ELEVATION_METRES = eINSTANCE.getSite_GroundSurfaceElevationMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Boundary</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SITE__BOUNDARY = eINSTANCE.getSite_Boundary();
+
+		/**
+		 * The meta object literal for the '<em><b>Sampling Locations</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SITE__SAMPLING_LOCATIONS = eINSTANCE.getSite_SamplingLocations();
 
 		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.SoilLayerImpl <em>Soil Layer</em>}' class.
@@ -1507,6 +3842,46 @@ public interface SitePackage extends EPackage {
 		EAttribute SOIL_LAYER__DISPERSIVITY_METRES = eINSTANCE.getSoilLayer_DispersivityMetres();
 
 		/**
+		 * The meta object literal for the '<em><b>Swell Factor</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SOIL_LAYER__SWELL_FACTOR = eINSTANCE.getSoilLayer_SwellFactor();
+
+		/**
+		 * The meta object literal for the '<em><b>Shrinkage Factor</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SOIL_LAYER__SHRINKAGE_FACTOR = eINSTANCE.getSoilLayer_ShrinkageFactor();
+
+		/**
+		 * The meta object literal for the '<em><b>Dispersivity Rule</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SOIL_LAYER__DISPERSIVITY_RULE = eINSTANCE.getSoilLayer_DispersivityRule();
+
+		/**
+		 * The meta object literal for the '<em><b>Dispersivity Scale Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SOIL_LAYER__DISPERSIVITY_SCALE_METRES = eINSTANCE.getSoilLayer_DispersivityScaleMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Effective Dispersivity Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SOIL_LAYER__EFFECTIVE_DISPERSIVITY_METRES = eINSTANCE.getSoilLayer_EffectiveDispersivityMetres();
+
+		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.ContaminantImpl <em>Contaminant</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -1573,6 +3948,110 @@ public interface SitePackage extends EPackage {
 		EAttribute CONTAMINANT__HALF_LIFE_DAYS = eINSTANCE.getContaminant_HalfLifeDays();
 
 		/**
+		 * The meta object literal for the '<em><b>Isotherm</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__ISOTHERM = eINSTANCE.getContaminant_Isotherm();
+
+		/**
+		 * The meta object literal for the '<em><b>Freundlich Kf Mg Per Kg Per Mg Per Litre To N</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__FREUNDLICH_KF_MG_PER_KG_PER_MG_PER_LITRE_TO_N = eINSTANCE.getContaminant_FreundlichKfMgPerKgPerMgPerLitreToN();
+
+		/**
+		 * The meta object literal for the '<em><b>Freundlich Exponent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__FREUNDLICH_EXPONENT = eINSTANCE.getContaminant_FreundlichExponent();
+
+		/**
+		 * The meta object literal for the '<em><b>Langmuir Maximum Milligrams Per Kg</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__LANGMUIR_MAXIMUM_MILLIGRAMS_PER_KG = eINSTANCE.getContaminant_LangmuirMaximumMilligramsPerKg();
+
+		/**
+		 * The meta object literal for the '<em><b>Langmuir Constant Litres Per Milligram</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__LANGMUIR_CONSTANT_LITRES_PER_MILLIGRAM = eINSTANCE.getContaminant_LangmuirConstantLitresPerMilligram();
+
+		/**
+		 * The meta object literal for the '<em><b>Water Solubility Milligrams Per Litre</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__WATER_SOLUBILITY_MILLIGRAMS_PER_LITRE = eINSTANCE.getContaminant_WaterSolubilityMilligramsPerLitre();
+
+		/**
+		 * The meta object literal for the '<em><b>Nonequilibrium</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__NONEQUILIBRIUM = eINSTANCE.getContaminant_Nonequilibrium();
+
+		/**
+		 * The meta object literal for the '<em><b>Beta</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__BETA = eINSTANCE.getContaminant_Beta();
+
+		/**
+		 * The meta object literal for the '<em><b>Omega</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__OMEGA = eINSTANCE.getContaminant_Omega();
+
+		/**
+		 * The meta object literal for the '<em><b>Mobile Water Fraction</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__MOBILE_WATER_FRACTION = eINSTANCE.getContaminant_MobileWaterFraction();
+
+		/**
+		 * The meta object literal for the '<em><b>Mobile Site Fraction</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__MOBILE_SITE_FRACTION = eINSTANCE.getContaminant_MobileSiteFraction();
+
+		/**
+		 * The meta object literal for the '<em><b>Mass Transfer Rate Per Day</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__MASS_TRANSFER_RATE_PER_DAY = eINSTANCE.getContaminant_MassTransferRatePerDay();
+
+		/**
+		 * The meta object literal for the '<em><b>Property Source</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTAMINANT__PROPERTY_SOURCE = eINSTANCE.getContaminant_PropertySource();
+
+		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.CleanupLevelImpl <em>Cleanup Level</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -1605,6 +4084,38 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute CLEANUP_LEVEL__BASIS = eINSTANCE.getCleanupLevel_Basis();
+
+		/**
+		 * The meta object literal for the '<em><b>Soil Level Entered</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CLEANUP_LEVEL__SOIL_LEVEL_ENTERED = eINSTANCE.getCleanupLevel_SoilLevelEntered();
+
+		/**
+		 * The meta object literal for the '<em><b>Porewater Level Entered</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED = eINSTANCE.getCleanupLevel_PorewaterLevelEntered();
+
+		/**
+		 * The meta object literal for the '<em><b>Porewater Level Milligrams Per Litre</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE = eINSTANCE.getCleanupLevel_PorewaterLevelMilligramsPerLitre();
+
+		/**
+		 * The meta object literal for the '<em><b>Statistic</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CLEANUP_LEVEL__STATISTIC = eINSTANCE.getCleanupLevel_Statistic();
 
 		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.TreatmentZoneImpl <em>Treatment Zone</em>}' class.
@@ -1655,6 +4166,38 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EReference TREATMENT_ZONE__SOURCE_CONCENTRATIONS = eINSTANCE.getTreatmentZone_SourceConcentrations();
+
+		/**
+		 * The meta object literal for the '<em><b>Footprint</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference TREATMENT_ZONE__FOOTPRINT = eINSTANCE.getTreatmentZone_Footprint();
+
+		/**
+		 * The meta object literal for the '<em><b>Effective Area Square Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute TREATMENT_ZONE__EFFECTIVE_AREA_SQUARE_METRES = eINSTANCE.getTreatmentZone_EffectiveAreaSquareMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Volume Cubic Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute TREATMENT_ZONE__VOLUME_CUBIC_METRES = eINSTANCE.getTreatmentZone_VolumeCubicMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Pore Volume Cubic Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute TREATMENT_ZONE__PORE_VOLUME_CUBIC_METRES = eINSTANCE.getTreatmentZone_PoreVolumeCubicMetres();
 
 		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.SourceConcentrationImpl <em>Source Concentration</em>}' class.
@@ -1749,6 +4292,520 @@ public interface SitePackage extends EPackage {
 		EAttribute FLUSHING_DESIGN__MAX_PORE_VOLUMES = eINSTANCE.getFlushingDesign_MaxPoreVolumes();
 
 		/**
+		 * The meta object literal for the '<em><b>Solution Method</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute FLUSHING_DESIGN__SOLUTION_METHOD = eINSTANCE.getFlushingDesign_SolutionMethod();
+
+		/**
+		 * The meta object literal for the '<em><b>Numerical Cell Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute FLUSHING_DESIGN__NUMERICAL_CELL_COUNT = eINSTANCE.getFlushingDesign_NumericalCellCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Numerical Relative Tolerance</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE = eINSTANCE.getFlushingDesign_NumericalRelativeTolerance();
+
+		/**
+		 * The meta object literal for the '<em><b>Monitoring Interval Days</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS = eINSTANCE.getFlushingDesign_MonitoringIntervalDays();
+
+		/**
+		 * The meta object literal for the '<em><b>Amendment Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute FLUSHING_DESIGN__AMENDMENT_NAME = eINSTANCE.getFlushingDesign_AmendmentName();
+
+		/**
+		 * The meta object literal for the '<em><b>Amendment Dose Kilograms Per Cubic Metre</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE = eINSTANCE.getFlushingDesign_AmendmentDoseKilogramsPerCubicMetre();
+
+		/**
+		 * The meta object literal for the '<em><b>Price Book</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference FLUSHING_DESIGN__PRICE_BOOK = eINSTANCE.getFlushingDesign_PriceBook();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.RevisionImpl <em>Revision</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.RevisionImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getRevision()
+		 * @generated
+		 */
+		EClass REVISION = eINSTANCE.getRevision();
+
+		/**
+		 * The meta object literal for the '<em><b>Author</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REVISION__AUTHOR = eINSTANCE.getRevision_Author();
+
+		/**
+		 * The meta object literal for the '<em><b>Timestamp</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REVISION__TIMESTAMP = eINSTANCE.getRevision_Timestamp();
+
+		/**
+		 * The meta object literal for the '<em><b>Summary</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REVISION__SUMMARY = eINSTANCE.getRevision_Summary();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.VertexImpl <em>Vertex</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.VertexImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getVertex()
+		 * @generated
+		 */
+		EClass VERTEX = eINSTANCE.getVertex();
+
+		/**
+		 * The meta object literal for the '<em><b>Easting Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VERTEX__EASTING_METRES = eINSTANCE.getVertex_EastingMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Northing Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VERTEX__NORTHING_METRES = eINSTANCE.getVertex_NorthingMetres();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.SamplingLocationImpl <em>Sampling Location</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.SamplingLocationImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getSamplingLocation()
+		 * @generated
+		 */
+		EClass SAMPLING_LOCATION = eINSTANCE.getSamplingLocation();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLING_LOCATION__NAME = eINSTANCE.getSamplingLocation_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Easting Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLING_LOCATION__EASTING_METRES = eINSTANCE.getSamplingLocation_EastingMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Northing Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLING_LOCATION__NORTHING_METRES = eINSTANCE.getSamplingLocation_NorthingMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Ground Elevation Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLING_LOCATION__GROUND_ELEVATION_METRES = eINSTANCE.getSamplingLocation_GroundElevationMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Samples</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SAMPLING_LOCATION__SAMPLES = eINSTANCE.getSamplingLocation_Samples();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.SampleImpl <em>Sample</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.SampleImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getSample()
+		 * @generated
+		 */
+		EClass SAMPLE = eINSTANCE.getSample();
+
+		/**
+		 * The meta object literal for the '<em><b>Top Depth Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLE__TOP_DEPTH_METRES = eINSTANCE.getSample_TopDepthMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Bottom Depth Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLE__BOTTOM_DEPTH_METRES = eINSTANCE.getSample_BottomDepthMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Contaminant</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SAMPLE__CONTAMINANT = eINSTANCE.getSample_Contaminant();
+
+		/**
+		 * The meta object literal for the '<em><b>Concentration Milligrams Per Kg</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLE__CONCENTRATION_MILLIGRAMS_PER_KG = eINSTANCE.getSample_ConcentrationMilligramsPerKg();
+
+		/**
+		 * The meta object literal for the '<em><b>Non Detect</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLE__NON_DETECT = eINSTANCE.getSample_NonDetect();
+
+		/**
+		 * The meta object literal for the '<em><b>Detection Limit Milligrams Per Kg</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SAMPLE__DETECTION_LIMIT_MILLIGRAMS_PER_KG = eINSTANCE.getSample_DetectionLimitMilligramsPerKg();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.ExcavationDesignImpl <em>Excavation Design</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.ExcavationDesignImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getExcavationDesign()
+		 * @generated
+		 */
+		EClass EXCAVATION_DESIGN = eINSTANCE.getExcavationDesign();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXCAVATION_DESIGN__NAME = eINSTANCE.getExcavationDesign_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Zone</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference EXCAVATION_DESIGN__ZONE = eINSTANCE.getExcavationDesign_Zone();
+
+		/**
+		 * The meta object literal for the '<em><b>Soil Type</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXCAVATION_DESIGN__SOIL_TYPE = eINSTANCE.getExcavationDesign_SoilType();
+
+		/**
+		 * The meta object literal for the '<em><b>Side Slope Horizontal Per Vertical</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXCAVATION_DESIGN__SIDE_SLOPE_HORIZONTAL_PER_VERTICAL = eINSTANCE.getExcavationDesign_SideSlopeHorizontalPerVertical();
+
+		/**
+		 * The meta object literal for the '<em><b>Overdig Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXCAVATION_DESIGN__OVERDIG_METRES = eINSTANCE.getExcavationDesign_OverdigMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Truck Heaped Capacity Cubic Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXCAVATION_DESIGN__TRUCK_HEAPED_CAPACITY_CUBIC_METRES = eINSTANCE.getExcavationDesign_TruckHeapedCapacityCubicMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Truck Payload Kilograms</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXCAVATION_DESIGN__TRUCK_PAYLOAD_KILOGRAMS = eINSTANCE.getExcavationDesign_TruckPayloadKilograms();
+
+		/**
+		 * The meta object literal for the '<em><b>Price Book</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference EXCAVATION_DESIGN__PRICE_BOOK = eINSTANCE.getExcavationDesign_PriceBook();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.PriceBookImpl <em>Price Book</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.PriceBookImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getPriceBook()
+		 * @generated
+		 */
+		EClass PRICE_BOOK = eINSTANCE.getPriceBook();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__NAME = eINSTANCE.getPriceBook_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Currency</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__CURRENCY = eINSTANCE.getPriceBook_Currency();
+
+		/**
+		 * The meta object literal for the '<em><b>Reference</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__REFERENCE = eINSTANCE.getPriceBook_Reference();
+
+		/**
+		 * The meta object literal for the '<em><b>Items</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PRICE_BOOK__ITEMS = eINSTANCE.getPriceBook_Items();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.PriceItemImpl <em>Price Item</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.PriceItemImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getPriceItem()
+		 * @generated
+		 */
+		EClass PRICE_ITEM = eINSTANCE.getPriceItem();
+
+		/**
+		 * The meta object literal for the '<em><b>Code</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_ITEM__CODE = eINSTANCE.getPriceItem_Code();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_ITEM__NAME = eINSTANCE.getPriceItem_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_ITEM__UNIT = eINSTANCE.getPriceItem_Unit();
+
+		/**
+		 * The meta object literal for the '<em><b>Rate Per Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_ITEM__RATE_PER_UNIT = eINSTANCE.getPriceItem_RatePerUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Currency</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_ITEM__CURRENCY = eINSTANCE.getPriceItem_Currency();
+
+		/**
+		 * The meta object literal for the '<em><b>Source Note</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_ITEM__SOURCE_NOTE = eINSTANCE.getPriceItem_SourceNote();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.ColumnTestImpl <em>Column Test</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.ColumnTestImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTest()
+		 * @generated
+		 */
+		EClass COLUMN_TEST = eINSTANCE.getColumnTest();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__NAME = eINSTANCE.getColumnTest_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Contaminant</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference COLUMN_TEST__CONTAMINANT = eINSTANCE.getColumnTest_Contaminant();
+
+		/**
+		 * The meta object literal for the '<em><b>Layer</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference COLUMN_TEST__LAYER = eINSTANCE.getColumnTest_Layer();
+
+		/**
+		 * The meta object literal for the '<em><b>Kind</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__KIND = eINSTANCE.getColumnTest_Kind();
+
+		/**
+		 * The meta object literal for the '<em><b>Column Length Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__COLUMN_LENGTH_METRES = eINSTANCE.getColumnTest_ColumnLengthMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Darcy Flux Metres Per Day</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__DARCY_FLUX_METRES_PER_DAY = eINSTANCE.getColumnTest_DarcyFluxMetresPerDay();
+
+		/**
+		 * The meta object literal for the '<em><b>Water Content</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__WATER_CONTENT = eINSTANCE.getColumnTest_WaterContent();
+
+		/**
+		 * The meta object literal for the '<em><b>Bulk Density Kg Per Cubic Metre</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__BULK_DENSITY_KG_PER_CUBIC_METRE = eINSTANCE.getColumnTest_BulkDensityKgPerCubicMetre();
+
+		/**
+		 * The meta object literal for the '<em><b>Reference Concentration Milligrams Per Litre</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST__REFERENCE_CONCENTRATION_MILLIGRAMS_PER_LITRE = eINSTANCE.getColumnTest_ReferenceConcentrationMilligramsPerLitre();
+
+		/**
+		 * The meta object literal for the '<em><b>Points</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference COLUMN_TEST__POINTS = eINSTANCE.getColumnTest_Points();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.ColumnTestPointImpl <em>Column Test Point</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.ColumnTestPointImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTestPoint()
+		 * @generated
+		 */
+		EClass COLUMN_TEST_POINT = eINSTANCE.getColumnTestPoint();
+
+		/**
+		 * The meta object literal for the '<em><b>Pore Volumes</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST_POINT__PORE_VOLUMES = eINSTANCE.getColumnTestPoint_PoreVolumes();
+
+		/**
+		 * The meta object literal for the '<em><b>Relative Concentration</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute COLUMN_TEST_POINT__RELATIVE_CONCENTRATION = eINSTANCE.getColumnTestPoint_RelativeConcentration();
+
+		/**
 		 * The meta object literal for the '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}' enum.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -1757,6 +4814,86 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EEnum COMPLIANCE_CRITERION = eINSTANCE.getComplianceCriterion();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.UnitSystem <em>Unit System</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.UnitSystem
+		 * @see eluvia.site.model.impl.SitePackageImpl#getUnitSystem()
+		 * @generated
+		 */
+		EEnum UNIT_SYSTEM = eINSTANCE.getUnitSystem();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.DispersivityRule <em>Dispersivity Rule</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.DispersivityRule
+		 * @see eluvia.site.model.impl.SitePackageImpl#getDispersivityRule()
+		 * @generated
+		 */
+		EEnum DISPERSIVITY_RULE = eINSTANCE.getDispersivityRule();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.SorptionIsotherm <em>Sorption Isotherm</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.SorptionIsotherm
+		 * @see eluvia.site.model.impl.SitePackageImpl#getSorptionIsotherm()
+		 * @generated
+		 */
+		EEnum SORPTION_ISOTHERM = eINSTANCE.getSorptionIsotherm();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.NonequilibriumEntry <em>Nonequilibrium Entry</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.NonequilibriumEntry
+		 * @see eluvia.site.model.impl.SitePackageImpl#getNonequilibriumEntry()
+		 * @generated
+		 */
+		EEnum NONEQUILIBRIUM_ENTRY = eINSTANCE.getNonequilibriumEntry();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.ComplianceStatistic <em>Compliance Statistic</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.ComplianceStatistic
+		 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceStatistic()
+		 * @generated
+		 */
+		EEnum COMPLIANCE_STATISTIC = eINSTANCE.getComplianceStatistic();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.SolutionMethod <em>Solution Method</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.SolutionMethod
+		 * @see eluvia.site.model.impl.SitePackageImpl#getSolutionMethod()
+		 * @generated
+		 */
+		EEnum SOLUTION_METHOD = eINSTANCE.getSolutionMethod();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.ExcavationSoilType <em>Excavation Soil Type</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.ExcavationSoilType
+		 * @see eluvia.site.model.impl.SitePackageImpl#getExcavationSoilType()
+		 * @generated
+		 */
+		EEnum EXCAVATION_SOIL_TYPE = eINSTANCE.getExcavationSoilType();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.ColumnTestKind <em>Column Test Kind</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.ColumnTestKind
+		 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTestKind()
+		 * @generated
+		 */
+		EEnum COLUMN_TEST_KIND = eINSTANCE.getColumnTestKind();
 
 	}
 

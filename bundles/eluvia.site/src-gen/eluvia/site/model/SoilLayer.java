@@ -27,6 +27,11 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.SoilLayer#getOrganicCarbonFraction <em>Organic Carbon Fraction</em>}</li>
  *   <li>{@link eluvia.site.model.SoilLayer#getSaturatedConductivityMetresPerDay <em>Saturated Conductivity Metres Per Day</em>}</li>
  *   <li>{@link eluvia.site.model.SoilLayer#getDispersivityMetres <em>Dispersivity Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.SoilLayer#getSwellFactor <em>Swell Factor</em>}</li>
+ *   <li>{@link eluvia.site.model.SoilLayer#getShrinkageFactor <em>Shrinkage Factor</em>}</li>
+ *   <li>{@link eluvia.site.model.SoilLayer#getDispersivityRule <em>Dispersivity Rule</em>}</li>
+ *   <li>{@link eluvia.site.model.SoilLayer#getDispersivityScaleMetres <em>Dispersivity Scale Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.SoilLayer#getEffectiveDispersivityMetres <em>Effective Dispersivity Metres</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getSoilLayer()
@@ -283,5 +288,122 @@ public interface SoilLayer extends EObject {
 	 * @generated
 	 */
 	void setDispersivityMetres(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Swell Factor</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Swell factor, dimensionless: loose volume = bank volume (1 + swell). E.g. 0.25 for 25 %.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Swell Factor</em>' attribute.
+	 * @see #setSwellFactor(double)
+	 * @see eluvia.site.model.SitePackage#getSoilLayer_SwellFactor()
+	 * @model
+	 * @generated
+	 */
+	double getSwellFactor();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.SoilLayer#getSwellFactor <em>Swell Factor</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Swell Factor</em>' attribute.
+	 * @see #getSwellFactor()
+	 * @generated
+	 */
+	void setSwellFactor(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Shrinkage Factor</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Shrinkage factor, dimensionless: compacted volume = bank volume (1 - shrinkage). E.g. 0.10 for 10 %.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Shrinkage Factor</em>' attribute.
+	 * @see #setShrinkageFactor(double)
+	 * @see eluvia.site.model.SitePackage#getSoilLayer_ShrinkageFactor()
+	 * @model
+	 * @generated
+	 */
+	double getShrinkageFactor();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.SoilLayer#getShrinkageFactor <em>Shrinkage Factor</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Shrinkage Factor</em>' attribute.
+	 * @see #getShrinkageFactor()
+	 * @generated
+	 */
+	void setShrinkageFactor(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Dispersivity Rule</b></em>' attribute.
+	 * The literals are from the enumeration {@link eluvia.site.model.DispersivityRule}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * How the dispersivity is obtained: entered (dispersivityMetres) or derived from the flow length by a scale rule.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Dispersivity Rule</em>' attribute.
+	 * @see eluvia.site.model.DispersivityRule
+	 * @see #setDispersivityRule(DispersivityRule)
+	 * @see eluvia.site.model.SitePackage#getSoilLayer_DispersivityRule()
+	 * @model
+	 * @generated
+	 */
+	DispersivityRule getDispersivityRule();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.SoilLayer#getDispersivityRule <em>Dispersivity Rule</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Dispersivity Rule</em>' attribute.
+	 * @see eluvia.site.model.DispersivityRule
+	 * @see #getDispersivityRule()
+	 * @generated
+	 */
+	void setDispersivityRule(DispersivityRule value);
+
+	/**
+	 * Returns the value of the '<em><b>Dispersivity Scale Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Flow length L in metres used by a dispersivity scale rule; 0 means the layer thickness.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Dispersivity Scale Metres</em>' attribute.
+	 * @see #setDispersivityScaleMetres(double)
+	 * @see eluvia.site.model.SitePackage#getSoilLayer_DispersivityScaleMetres()
+	 * @model
+	 * @generated
+	 */
+	double getDispersivityScaleMetres();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.SoilLayer#getDispersivityScaleMetres <em>Dispersivity Scale Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Dispersivity Scale Metres</em>' attribute.
+	 * @see #getDispersivityScaleMetres()
+	 * @generated
+	 */
+	void setDispersivityScaleMetres(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Effective Dispersivity Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The dispersivity in metres that calculations use: dispersivityMetres when entered, otherwise the scale rule applied to the flow length (see eluvia.site.derived.Dispersivities).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Effective Dispersivity Metres</em>' attribute.
+	 * @see eluvia.site.model.SitePackage#getSoilLayer_EffectiveDispersivityMetres()
+	 * @model transient="true" changeable="false" volatile="true" derived="true"
+	 * @generated
+	 */
+	double getEffectiveDispersivityMetres();
 
 } // SoilLayer

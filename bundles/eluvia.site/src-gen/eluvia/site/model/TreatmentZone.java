@@ -24,6 +24,10 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.TreatmentZone#getTopDepthMetres <em>Top Depth Metres</em>}</li>
  *   <li>{@link eluvia.site.model.TreatmentZone#getBottomDepthMetres <em>Bottom Depth Metres</em>}</li>
  *   <li>{@link eluvia.site.model.TreatmentZone#getSourceConcentrations <em>Source Concentrations</em>}</li>
+ *   <li>{@link eluvia.site.model.TreatmentZone#getFootprint <em>Footprint</em>}</li>
+ *   <li>{@link eluvia.site.model.TreatmentZone#getEffectiveAreaSquareMetres <em>Effective Area Square Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.TreatmentZone#getVolumeCubicMetres <em>Volume Cubic Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.TreatmentZone#getPoreVolumeCubicMetres <em>Pore Volume Cubic Metres</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getTreatmentZone()
@@ -145,5 +149,62 @@ public interface TreatmentZone extends EObject {
 	 * @generated
 	 */
 	EList<SourceConcentration> getSourceConcentrations();
+
+	/**
+	 * Returns the value of the '<em><b>Footprint</b></em>' containment reference list.
+	 * The list contents are of type {@link eluvia.site.model.Vertex}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Footprint polygon of the zone in the local frame (at least 3 vertices, or none: then areaSquareMetres is used).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Footprint</em>' containment reference list.
+	 * @see eluvia.site.model.SitePackage#getTreatmentZone_Footprint()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Vertex> getFootprint();
+
+	/**
+	 * Returns the value of the '<em><b>Effective Area Square Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Plan area in m2 used by calculations: the footprint polygon's area by the shoelace formula when it has 3 or more vertices, otherwise areaSquareMetres.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Effective Area Square Metres</em>' attribute.
+	 * @see eluvia.site.model.SitePackage#getTreatmentZone_EffectiveAreaSquareMetres()
+	 * @model transient="true" changeable="false" volatile="true" derived="true"
+	 * @generated
+	 */
+	double getEffectiveAreaSquareMetres();
+
+	/**
+	 * Returns the value of the '<em><b>Volume Cubic Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Bank volume of the zone in m3: effective area times (bottom depth - top depth).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Volume Cubic Metres</em>' attribute.
+	 * @see eluvia.site.model.SitePackage#getTreatmentZone_VolumeCubicMetres()
+	 * @model transient="true" changeable="false" volatile="true" derived="true"
+	 * @generated
+	 */
+	double getVolumeCubicMetres();
+
+	/**
+	 * Returns the value of the '<em><b>Pore Volume Cubic Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Pore volume of the zone in m3 during flushing: the sum over the soil layers it spans of area x thickness within the zone x water content (the water-filled pore space that one pore volume of flushing displaces).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Pore Volume Cubic Metres</em>' attribute.
+	 * @see eluvia.site.model.SitePackage#getTreatmentZone_PoreVolumeCubicMetres()
+	 * @model transient="true" changeable="false" volatile="true" derived="true"
+	 * @generated
+	 */
+	double getPoreVolumeCubicMetres();
 
 } // TreatmentZone

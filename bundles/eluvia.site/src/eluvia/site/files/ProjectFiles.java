@@ -4,22 +4,13 @@ import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
-import java.nio.file.attribute.PosixFileAttributeView;
-import java.nio.file.attribute.PosixFilePermission;
-import java.nio.file.attribute.PosixFilePermissions;
 import java.util.HashMap;
 import java.util.Iterator;
 import java.util.Map;
 import java.util.Objects;
-import java.util.Set;
 
 import org.eclipse.emf.common.util.URI;
 import org.eclipse.emf.ecore.EObject;
@@ -31,6 +22,7 @@ import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.emf.ecore.xmi.XMLResource;
 import org.eclipse.emf.ecore.xmi.impl.XMIResourceFactoryImpl;
 
+import eluvia.site.internal.files.AtomicFileWriter;
 import eluvia.site.internal.files.HostileInputGuard;
 import eluvia.site.internal.files.LoadErrors;
 import eluvia.site.internal.files.LockedUriConverter;
@@ -63,15 +55,13 @@ public final class ProjectFiles {
     public static final String EXTENSION = "eluvia";
 
     /** The schema version this code writes, and the newest it reads. */
-    public static final int CURRENT_SCHEMA_VERSION = 1;
+    public static final int CURRENT_SCHEMA_VERSION = 2;
 
     /** Appended to the project file's name for the one backup kept by {@link #save}. */
     public static final String BACKUP_SUFFIX = ".bak";
 
     /** Files larger than this (in bytes) are refused unread. */
     public static final long MAX_FILE_BYTES = 64L * 1024 * 1024;
-
-    private static final String TEMP_SUFFIX = ".saving";
 
     /** The URI given to resources read from a stream; never resolved (see LockedUriConverter). */
     static final URI LOAD_URI = URI.createURI("eluvia:/loaded/project." + EXTENSION);
@@ -118,8 +108,9 @@ public final class ProjectFiles {
         }
         try {
             HostileInputGuard.RootInfo root = HostileInputGuard.check(bytes, name);
-            byte[] current = SchemaMigrations.migrate(bytes, root, name);
-            Project project = parse(current, name);
+            SchemaMigrations.Plan plan = SchemaMigrations.plan(root, name);
+            Project project = parse(plan.beforeLoad(bytes, name), name);
+            plan.afterLoad(project);
             project.setSchemaVersion(CURRENT_SCHEMA_VERSION);
             return project;
         } catch (RuntimeException | StackOverflowError e) {
@@ -211,21 +202,7 @@ public final class ProjectFiles {
         Objects.requireNonNull(project, "project");
         Objects.requireNonNull(file, "file");
         byte[] bytes = toBytes(project);
-        Path target = file.toAbsolutePath();
-        Path folder = target.getParent();
-        String fileName = target.getFileName().toString();
-        Path temp = Files.createTempFile(folder, "." + fileName + ".", TEMP_SUFFIX);
-        try {
-            copyPermissions(target, temp);
-            writeAndForce(temp, bytes);
-            if (Files.isRegularFile(target)) {
-                keepBackup(target, folder.resolve(fileName + BACKUP_SUFFIX), folder, fileName);
-            }
-            moveAtomically(temp, target);
-            forceFolder(folder);
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+        AtomicFileWriter.write(file, bytes, BACKUP_SUFFIX);
     }
 
     /** The file content {@link #save} writes, as bytes (UTF-8 XMI). */
@@ -258,60 +235,6 @@ public final class ProjectFiles {
                     }
                 }
             }
-        }
-    }
-
-    /** Temporary files are private (rw-------); the saved file keeps the old one's permissions, or rw-r--r--. */
-    private static void copyPermissions(Path target, Path temp) throws IOException {
-        if (!Files.getFileStore(temp).supportsFileAttributeView(PosixFileAttributeView.class)) {
-            return;
-        }
-        Set<PosixFilePermission> permissions = Files.isRegularFile(target)
-                ? Files.getPosixFilePermissions(target)
-                : PosixFilePermissions.fromString("rw-r--r--");
-        Files.setPosixFilePermissions(temp, permissions);
-    }
-
-    private static void writeAndForce(Path path, byte[] bytes) throws IOException {
-        try (FileChannel channel = FileChannel.open(path, StandardOpenOption.WRITE,
-                StandardOpenOption.TRUNCATE_EXISTING)) {
-            ByteBuffer buffer = ByteBuffer.wrap(bytes);
-            while (buffer.hasRemaining()) {
-                channel.write(buffer);
-            }
-            channel.force(true);
-        }
-    }
-
-    private static void keepBackup(Path target, Path backup, Path folder, String fileName) throws IOException {
-        // Copy (not move) so that the target exists at every moment; then rename into place.
-        Path tempBackup = Files.createTempFile(folder, "." + fileName + BACKUP_SUFFIX + ".", TEMP_SUFFIX);
-        try {
-            Files.copy(target, tempBackup, StandardCopyOption.REPLACE_EXISTING);
-            try (FileChannel channel = FileChannel.open(tempBackup, StandardOpenOption.WRITE)) {
-                channel.force(true);
-            }
-            moveAtomically(tempBackup, backup);
-        } finally {
-            Files.deleteIfExists(tempBackup);
-        }
-    }
-
-    private static void moveAtomically(Path from, Path to) throws IOException {
-        try {
-            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-        } catch (AtomicMoveNotSupportedException e) {
-            throw new IOException("the file system of " + to.getParent()
-                    + " cannot replace a file atomically; save the project on a local disk", e);
-        }
-    }
-
-    private static void forceFolder(Path folder) {
-        // Makes the rename durable on POSIX file systems; not possible (nor needed) everywhere.
-        try (FileChannel channel = FileChannel.open(folder, StandardOpenOption.READ)) {
-            channel.force(true);
-        } catch (IOException | UnsupportedOperationException e) {
-            // The rename itself has happened; only its durability across a power cut is weaker.
         }
     }
 

@@ -48,9 +48,9 @@ final class SchemaVersionTest {
     @Test
     void loadReadsTheVersion() throws Exception {
         Project loaded = load("<site:Project xmlns:site=\"urn:eluvia:site\" xmlns:xmi=\"http://www.omg.org/XMI\" xmi:version=\"2.0\""
-                + " name=\"p\" schemaVersion=\"1\"><site name=\"s\"/></site:Project>");
+                + " name=\"p\" schemaVersion=\"" + ProjectFiles.CURRENT_SCHEMA_VERSION + "\"><site name=\"s\"/></site:Project>");
 
-        assertEquals(1, loaded.getSchemaVersion());
+        assertEquals(ProjectFiles.CURRENT_SCHEMA_VERSION, loaded.getSchemaVersion());
         assertEquals("s", loaded.getSite().getName());
     }
 

@@ -3,6 +3,7 @@
 package eluvia.site.model.impl;
 
 import eluvia.site.model.CleanupLevel;
+import eluvia.site.model.ComplianceStatistic;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.SitePackage;
 
@@ -25,6 +26,10 @@ import org.eclipse.emf.ecore.impl.MinimalEObjectImpl;
  *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#getContaminant <em>Contaminant</em>}</li>
  *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#getSoilLevelMilligramsPerKg <em>Soil Level Milligrams Per Kg</em>}</li>
  *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#getBasis <em>Basis</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#isSoilLevelEntered <em>Soil Level Entered</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#isPorewaterLevelEntered <em>Porewater Level Entered</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#getPorewaterLevelMilligramsPerLitre <em>Porewater Level Milligrams Per Litre</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.CleanupLevelImpl#getStatistic <em>Statistic</em>}</li>
  * </ul>
  *
  * @generated
@@ -79,6 +84,86 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 	 * @ordered
 	 */
 	protected String basis = BASIS_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #isSoilLevelEntered() <em>Soil Level Entered</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #isSoilLevelEntered()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final boolean SOIL_LEVEL_ENTERED_EDEFAULT = true;
+
+	/**
+	 * The cached value of the '{@link #isSoilLevelEntered() <em>Soil Level Entered</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #isSoilLevelEntered()
+	 * @generated
+	 * @ordered
+	 */
+	protected boolean soilLevelEntered = SOIL_LEVEL_ENTERED_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #isPorewaterLevelEntered() <em>Porewater Level Entered</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #isPorewaterLevelEntered()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final boolean POREWATER_LEVEL_ENTERED_EDEFAULT = false;
+
+	/**
+	 * The cached value of the '{@link #isPorewaterLevelEntered() <em>Porewater Level Entered</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #isPorewaterLevelEntered()
+	 * @generated
+	 * @ordered
+	 */
+	protected boolean porewaterLevelEntered = POREWATER_LEVEL_ENTERED_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getPorewaterLevelMilligramsPerLitre() <em>Porewater Level Milligrams Per Litre</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPorewaterLevelMilligramsPerLitre()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double POREWATER_LEVEL_MILLIGRAMS_PER_LITRE_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getPorewaterLevelMilligramsPerLitre() <em>Porewater Level Milligrams Per Litre</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPorewaterLevelMilligramsPerLitre()
+	 * @generated
+	 * @ordered
+	 */
+	protected double porewaterLevelMilligramsPerLitre = POREWATER_LEVEL_MILLIGRAMS_PER_LITRE_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getStatistic() <em>Statistic</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getStatistic()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final ComplianceStatistic STATISTIC_EDEFAULT = ComplianceStatistic.NOT_TO_EXCEED;
+
+	/**
+	 * The cached value of the '{@link #getStatistic() <em>Statistic</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getStatistic()
+	 * @generated
+	 * @ordered
+	 */
+	protected ComplianceStatistic statistic = STATISTIC_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -191,6 +276,98 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 	 * @generated
 	 */
 	@Override
+	public boolean isSoilLevelEntered() {
+		return soilLevelEntered;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setSoilLevelEntered(boolean newSoilLevelEntered) {
+		boolean oldSoilLevelEntered = soilLevelEntered;
+		soilLevelEntered = newSoilLevelEntered;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.CLEANUP_LEVEL__SOIL_LEVEL_ENTERED, oldSoilLevelEntered, soilLevelEntered));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public boolean isPorewaterLevelEntered() {
+		return porewaterLevelEntered;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPorewaterLevelEntered(boolean newPorewaterLevelEntered) {
+		boolean oldPorewaterLevelEntered = porewaterLevelEntered;
+		porewaterLevelEntered = newPorewaterLevelEntered;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED, oldPorewaterLevelEntered, porewaterLevelEntered));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getPorewaterLevelMilligramsPerLitre() {
+		return porewaterLevelMilligramsPerLitre;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPorewaterLevelMilligramsPerLitre(double newPorewaterLevelMilligramsPerLitre) {
+		double oldPorewaterLevelMilligramsPerLitre = porewaterLevelMilligramsPerLitre;
+		porewaterLevelMilligramsPerLitre = newPorewaterLevelMilligramsPerLitre;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE, oldPorewaterLevelMilligramsPerLitre, porewaterLevelMilligramsPerLitre));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ComplianceStatistic getStatistic() {
+		return statistic;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setStatistic(ComplianceStatistic newStatistic) {
+		ComplianceStatistic oldStatistic = statistic;
+		statistic = newStatistic == null ? STATISTIC_EDEFAULT : newStatistic;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.CLEANUP_LEVEL__STATISTIC, oldStatistic, statistic));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case SitePackage.CLEANUP_LEVEL__CONTAMINANT:
@@ -200,6 +377,14 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 				return getSoilLevelMilligramsPerKg();
 			case SitePackage.CLEANUP_LEVEL__BASIS:
 				return getBasis();
+			case SitePackage.CLEANUP_LEVEL__SOIL_LEVEL_ENTERED:
+				return isSoilLevelEntered();
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED:
+				return isPorewaterLevelEntered();
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE:
+				return getPorewaterLevelMilligramsPerLitre();
+			case SitePackage.CLEANUP_LEVEL__STATISTIC:
+				return getStatistic();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -220,6 +405,18 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 				return;
 			case SitePackage.CLEANUP_LEVEL__BASIS:
 				setBasis((String)newValue);
+				return;
+			case SitePackage.CLEANUP_LEVEL__SOIL_LEVEL_ENTERED:
+				setSoilLevelEntered((Boolean)newValue);
+				return;
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED:
+				setPorewaterLevelEntered((Boolean)newValue);
+				return;
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE:
+				setPorewaterLevelMilligramsPerLitre((Double)newValue);
+				return;
+			case SitePackage.CLEANUP_LEVEL__STATISTIC:
+				setStatistic((ComplianceStatistic)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -242,6 +439,18 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 			case SitePackage.CLEANUP_LEVEL__BASIS:
 				setBasis(BASIS_EDEFAULT);
 				return;
+			case SitePackage.CLEANUP_LEVEL__SOIL_LEVEL_ENTERED:
+				setSoilLevelEntered(SOIL_LEVEL_ENTERED_EDEFAULT);
+				return;
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED:
+				setPorewaterLevelEntered(POREWATER_LEVEL_ENTERED_EDEFAULT);
+				return;
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE:
+				setPorewaterLevelMilligramsPerLitre(POREWATER_LEVEL_MILLIGRAMS_PER_LITRE_EDEFAULT);
+				return;
+			case SitePackage.CLEANUP_LEVEL__STATISTIC:
+				setStatistic(STATISTIC_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -260,6 +469,14 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 				return soilLevelMilligramsPerKg != SOIL_LEVEL_MILLIGRAMS_PER_KG_EDEFAULT;
 			case SitePackage.CLEANUP_LEVEL__BASIS:
 				return BASIS_EDEFAULT == null ? basis != null : !BASIS_EDEFAULT.equals(basis);
+			case SitePackage.CLEANUP_LEVEL__SOIL_LEVEL_ENTERED:
+				return soilLevelEntered != SOIL_LEVEL_ENTERED_EDEFAULT;
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_ENTERED:
+				return porewaterLevelEntered != POREWATER_LEVEL_ENTERED_EDEFAULT;
+			case SitePackage.CLEANUP_LEVEL__POREWATER_LEVEL_MILLIGRAMS_PER_LITRE:
+				return porewaterLevelMilligramsPerLitre != POREWATER_LEVEL_MILLIGRAMS_PER_LITRE_EDEFAULT;
+			case SitePackage.CLEANUP_LEVEL__STATISTIC:
+				return statistic != STATISTIC_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
 	}
@@ -278,6 +495,14 @@ public class CleanupLevelImpl extends MinimalEObjectImpl.Container implements Cl
 		result.append(soilLevelMilligramsPerKg);
 		result.append(", basis: ");
 		result.append(basis);
+		result.append(", soilLevelEntered: ");
+		result.append(soilLevelEntered);
+		result.append(", porewaterLevelEntered: ");
+		result.append(porewaterLevelEntered);
+		result.append(", porewaterLevelMilligramsPerLitre: ");
+		result.append(porewaterLevelMilligramsPerLitre);
+		result.append(", statistic: ");
+		result.append(statistic);
 		result.append(')');
 		return result.toString();
 	}

@@ -4,7 +4,9 @@ package eluvia.site.model.impl;
 
 import eluvia.site.model.ComplianceCriterion;
 import eluvia.site.model.FlushingDesign;
+import eluvia.site.model.PriceBook;
 import eluvia.site.model.SitePackage;
+import eluvia.site.model.SolutionMethod;
 import eluvia.site.model.TreatmentZone;
 
 import org.eclipse.emf.common.notify.Notification;
@@ -30,6 +32,13 @@ import org.eclipse.emf.ecore.impl.MinimalEObjectImpl;
  *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getCaptureEfficiency <em>Capture Efficiency</em>}</li>
  *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getCriterion <em>Criterion</em>}</li>
  *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getMaxPoreVolumes <em>Max Pore Volumes</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getSolutionMethod <em>Solution Method</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getNumericalCellCount <em>Numerical Cell Count</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getNumericalRelativeTolerance <em>Numerical Relative Tolerance</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getMonitoringIntervalDays <em>Monitoring Interval Days</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getAmendmentName <em>Amendment Name</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getAmendmentDoseKilogramsPerCubicMetre <em>Amendment Dose Kilograms Per Cubic Metre</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.FlushingDesignImpl#getPriceBook <em>Price Book</em>}</li>
  * </ul>
  *
  * @generated
@@ -164,6 +173,136 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 	 * @ordered
 	 */
 	protected double maxPoreVolumes = MAX_PORE_VOLUMES_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getSolutionMethod() <em>Solution Method</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSolutionMethod()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final SolutionMethod SOLUTION_METHOD_EDEFAULT = SolutionMethod.EQUILIBRIUM;
+
+	/**
+	 * The cached value of the '{@link #getSolutionMethod() <em>Solution Method</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSolutionMethod()
+	 * @generated
+	 * @ordered
+	 */
+	protected SolutionMethod solutionMethod = SOLUTION_METHOD_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getNumericalCellCount() <em>Numerical Cell Count</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getNumericalCellCount()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final int NUMERICAL_CELL_COUNT_EDEFAULT = 200;
+
+	/**
+	 * The cached value of the '{@link #getNumericalCellCount() <em>Numerical Cell Count</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getNumericalCellCount()
+	 * @generated
+	 * @ordered
+	 */
+	protected int numericalCellCount = NUMERICAL_CELL_COUNT_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getNumericalRelativeTolerance() <em>Numerical Relative Tolerance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getNumericalRelativeTolerance()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double NUMERICAL_RELATIVE_TOLERANCE_EDEFAULT = 1.0E-6;
+
+	/**
+	 * The cached value of the '{@link #getNumericalRelativeTolerance() <em>Numerical Relative Tolerance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getNumericalRelativeTolerance()
+	 * @generated
+	 * @ordered
+	 */
+	protected double numericalRelativeTolerance = NUMERICAL_RELATIVE_TOLERANCE_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getMonitoringIntervalDays() <em>Monitoring Interval Days</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMonitoringIntervalDays()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double MONITORING_INTERVAL_DAYS_EDEFAULT = 7.0;
+
+	/**
+	 * The cached value of the '{@link #getMonitoringIntervalDays() <em>Monitoring Interval Days</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMonitoringIntervalDays()
+	 * @generated
+	 * @ordered
+	 */
+	protected double monitoringIntervalDays = MONITORING_INTERVAL_DAYS_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getAmendmentName() <em>Amendment Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAmendmentName()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String AMENDMENT_NAME_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getAmendmentName() <em>Amendment Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAmendmentName()
+	 * @generated
+	 * @ordered
+	 */
+	protected String amendmentName = AMENDMENT_NAME_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getAmendmentDoseKilogramsPerCubicMetre() <em>Amendment Dose Kilograms Per Cubic Metre</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAmendmentDoseKilogramsPerCubicMetre()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getAmendmentDoseKilogramsPerCubicMetre() <em>Amendment Dose Kilograms Per Cubic Metre</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAmendmentDoseKilogramsPerCubicMetre()
+	 * @generated
+	 * @ordered
+	 */
+	protected double amendmentDoseKilogramsPerCubicMetre = AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getPriceBook() <em>Price Book</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPriceBook()
+	 * @generated
+	 * @ordered
+	 */
+	protected PriceBook priceBook;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -368,6 +507,184 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 	 * @generated
 	 */
 	@Override
+	public SolutionMethod getSolutionMethod() {
+		return solutionMethod;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setSolutionMethod(SolutionMethod newSolutionMethod) {
+		SolutionMethod oldSolutionMethod = solutionMethod;
+		solutionMethod = newSolutionMethod == null ? SOLUTION_METHOD_EDEFAULT : newSolutionMethod;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__SOLUTION_METHOD, oldSolutionMethod, solutionMethod));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public int getNumericalCellCount() {
+		return numericalCellCount;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setNumericalCellCount(int newNumericalCellCount) {
+		int oldNumericalCellCount = numericalCellCount;
+		numericalCellCount = newNumericalCellCount;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__NUMERICAL_CELL_COUNT, oldNumericalCellCount, numericalCellCount));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getNumericalRelativeTolerance() {
+		return numericalRelativeTolerance;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setNumericalRelativeTolerance(double newNumericalRelativeTolerance) {
+		double oldNumericalRelativeTolerance = numericalRelativeTolerance;
+		numericalRelativeTolerance = newNumericalRelativeTolerance;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE, oldNumericalRelativeTolerance, numericalRelativeTolerance));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getMonitoringIntervalDays() {
+		return monitoringIntervalDays;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setMonitoringIntervalDays(double newMonitoringIntervalDays) {
+		double oldMonitoringIntervalDays = monitoringIntervalDays;
+		monitoringIntervalDays = newMonitoringIntervalDays;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS, oldMonitoringIntervalDays, monitoringIntervalDays));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getAmendmentName() {
+		return amendmentName;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setAmendmentName(String newAmendmentName) {
+		String oldAmendmentName = amendmentName;
+		amendmentName = newAmendmentName;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__AMENDMENT_NAME, oldAmendmentName, amendmentName));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getAmendmentDoseKilogramsPerCubicMetre() {
+		return amendmentDoseKilogramsPerCubicMetre;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setAmendmentDoseKilogramsPerCubicMetre(double newAmendmentDoseKilogramsPerCubicMetre) {
+		double oldAmendmentDoseKilogramsPerCubicMetre = amendmentDoseKilogramsPerCubicMetre;
+		amendmentDoseKilogramsPerCubicMetre = newAmendmentDoseKilogramsPerCubicMetre;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE, oldAmendmentDoseKilogramsPerCubicMetre, amendmentDoseKilogramsPerCubicMetre));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public PriceBook getPriceBook() {
+		if (priceBook != null && priceBook.eIsProxy()) {
+			InternalEObject oldPriceBook = (InternalEObject)priceBook;
+			priceBook = (PriceBook)eResolveProxy(oldPriceBook);
+			if (priceBook != oldPriceBook) {
+				if (eNotificationRequired())
+					eNotify(new ENotificationImpl(this, Notification.RESOLVE, SitePackage.FLUSHING_DESIGN__PRICE_BOOK, oldPriceBook, priceBook));
+			}
+		}
+		return priceBook;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public PriceBook basicGetPriceBook() {
+		return priceBook;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPriceBook(PriceBook newPriceBook) {
+		PriceBook oldPriceBook = priceBook;
+		priceBook = newPriceBook;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.FLUSHING_DESIGN__PRICE_BOOK, oldPriceBook, priceBook));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case SitePackage.FLUSHING_DESIGN__NAME:
@@ -385,6 +702,21 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 				return getCriterion();
 			case SitePackage.FLUSHING_DESIGN__MAX_PORE_VOLUMES:
 				return getMaxPoreVolumes();
+			case SitePackage.FLUSHING_DESIGN__SOLUTION_METHOD:
+				return getSolutionMethod();
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_CELL_COUNT:
+				return getNumericalCellCount();
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE:
+				return getNumericalRelativeTolerance();
+			case SitePackage.FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS:
+				return getMonitoringIntervalDays();
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_NAME:
+				return getAmendmentName();
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE:
+				return getAmendmentDoseKilogramsPerCubicMetre();
+			case SitePackage.FLUSHING_DESIGN__PRICE_BOOK:
+				if (resolve) return getPriceBook();
+				return basicGetPriceBook();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -417,6 +749,27 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 				return;
 			case SitePackage.FLUSHING_DESIGN__MAX_PORE_VOLUMES:
 				setMaxPoreVolumes((Double)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__SOLUTION_METHOD:
+				setSolutionMethod((SolutionMethod)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_CELL_COUNT:
+				setNumericalCellCount((Integer)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE:
+				setNumericalRelativeTolerance((Double)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS:
+				setMonitoringIntervalDays((Double)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_NAME:
+				setAmendmentName((String)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE:
+				setAmendmentDoseKilogramsPerCubicMetre((Double)newValue);
+				return;
+			case SitePackage.FLUSHING_DESIGN__PRICE_BOOK:
+				setPriceBook((PriceBook)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -451,6 +804,27 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 			case SitePackage.FLUSHING_DESIGN__MAX_PORE_VOLUMES:
 				setMaxPoreVolumes(MAX_PORE_VOLUMES_EDEFAULT);
 				return;
+			case SitePackage.FLUSHING_DESIGN__SOLUTION_METHOD:
+				setSolutionMethod(SOLUTION_METHOD_EDEFAULT);
+				return;
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_CELL_COUNT:
+				setNumericalCellCount(NUMERICAL_CELL_COUNT_EDEFAULT);
+				return;
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE:
+				setNumericalRelativeTolerance(NUMERICAL_RELATIVE_TOLERANCE_EDEFAULT);
+				return;
+			case SitePackage.FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS:
+				setMonitoringIntervalDays(MONITORING_INTERVAL_DAYS_EDEFAULT);
+				return;
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_NAME:
+				setAmendmentName(AMENDMENT_NAME_EDEFAULT);
+				return;
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE:
+				setAmendmentDoseKilogramsPerCubicMetre(AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE_EDEFAULT);
+				return;
+			case SitePackage.FLUSHING_DESIGN__PRICE_BOOK:
+				setPriceBook((PriceBook)null);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -477,6 +851,20 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 				return criterion != CRITERION_EDEFAULT;
 			case SitePackage.FLUSHING_DESIGN__MAX_PORE_VOLUMES:
 				return maxPoreVolumes != MAX_PORE_VOLUMES_EDEFAULT;
+			case SitePackage.FLUSHING_DESIGN__SOLUTION_METHOD:
+				return solutionMethod != SOLUTION_METHOD_EDEFAULT;
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_CELL_COUNT:
+				return numericalCellCount != NUMERICAL_CELL_COUNT_EDEFAULT;
+			case SitePackage.FLUSHING_DESIGN__NUMERICAL_RELATIVE_TOLERANCE:
+				return numericalRelativeTolerance != NUMERICAL_RELATIVE_TOLERANCE_EDEFAULT;
+			case SitePackage.FLUSHING_DESIGN__MONITORING_INTERVAL_DAYS:
+				return monitoringIntervalDays != MONITORING_INTERVAL_DAYS_EDEFAULT;
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_NAME:
+				return AMENDMENT_NAME_EDEFAULT == null ? amendmentName != null : !AMENDMENT_NAME_EDEFAULT.equals(amendmentName);
+			case SitePackage.FLUSHING_DESIGN__AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE:
+				return amendmentDoseKilogramsPerCubicMetre != AMENDMENT_DOSE_KILOGRAMS_PER_CUBIC_METRE_EDEFAULT;
+			case SitePackage.FLUSHING_DESIGN__PRICE_BOOK:
+				return priceBook != null;
 		}
 		return super.eIsSet(featureID);
 	}
@@ -503,6 +891,18 @@ public class FlushingDesignImpl extends MinimalEObjectImpl.Container implements 
 		result.append(criterion);
 		result.append(", maxPoreVolumes: ");
 		result.append(maxPoreVolumes);
+		result.append(", solutionMethod: ");
+		result.append(solutionMethod);
+		result.append(", numericalCellCount: ");
+		result.append(numericalCellCount);
+		result.append(", numericalRelativeTolerance: ");
+		result.append(numericalRelativeTolerance);
+		result.append(", monitoringIntervalDays: ");
+		result.append(monitoringIntervalDays);
+		result.append(", amendmentName: ");
+		result.append(amendmentName);
+		result.append(", amendmentDoseKilogramsPerCubicMetre: ");
+		result.append(amendmentDoseKilogramsPerCubicMetre);
 		result.append(')');
 		return result.toString();
 	}

@@ -3,12 +3,17 @@
 package eluvia.site.model.impl;
 
 import eluvia.site.model.CleanupLevel;
+import eluvia.site.model.ColumnTest;
 import eluvia.site.model.Contaminant;
+import eluvia.site.model.ExcavationDesign;
 import eluvia.site.model.FlushingDesign;
+import eluvia.site.model.PriceBook;
 import eluvia.site.model.Project;
+import eluvia.site.model.Revision;
 import eluvia.site.model.Site;
 import eluvia.site.model.SitePackage;
 
+import eluvia.site.model.UnitSystem;
 import java.util.Collection;
 
 import org.eclipse.emf.common.notify.Notification;
@@ -40,6 +45,11 @@ import org.eclipse.emf.ecore.util.InternalEList;
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getContaminants <em>Contaminants</em>}</li>
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getCleanupLevels <em>Cleanup Levels</em>}</li>
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getFlushingDesigns <em>Flushing Designs</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getUnitSystem <em>Unit System</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getRevisions <em>Revisions</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getExcavationDesigns <em>Excavation Designs</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getPriceBooks <em>Price Books</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getColumnTests <em>Column Tests</em>}</li>
  * </ul>
  *
  * @generated
@@ -144,6 +154,66 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 	 * @ordered
 	 */
 	protected EList<FlushingDesign> flushingDesigns;
+
+	/**
+	 * The default value of the '{@link #getUnitSystem() <em>Unit System</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getUnitSystem()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final UnitSystem UNIT_SYSTEM_EDEFAULT = UnitSystem.SI;
+
+	/**
+	 * The cached value of the '{@link #getUnitSystem() <em>Unit System</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getUnitSystem()
+	 * @generated
+	 * @ordered
+	 */
+	protected UnitSystem unitSystem = UNIT_SYSTEM_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getRevisions() <em>Revisions</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getRevisions()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Revision> revisions;
+
+	/**
+	 * The cached value of the '{@link #getExcavationDesigns() <em>Excavation Designs</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getExcavationDesigns()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<ExcavationDesign> excavationDesigns;
+
+	/**
+	 * The cached value of the '{@link #getPriceBooks() <em>Price Books</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPriceBooks()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<PriceBook> priceBooks;
+
+	/**
+	 * The cached value of the '{@link #getColumnTests() <em>Column Tests</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getColumnTests()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<ColumnTest> columnTests;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -323,6 +393,81 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 	 * @generated
 	 */
 	@Override
+	public UnitSystem getUnitSystem() {
+		return unitSystem;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setUnitSystem(UnitSystem newUnitSystem) {
+		UnitSystem oldUnitSystem = unitSystem;
+		unitSystem = newUnitSystem == null ? UNIT_SYSTEM_EDEFAULT : newUnitSystem;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.PROJECT__UNIT_SYSTEM, oldUnitSystem, unitSystem));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<Revision> getRevisions() {
+		if (revisions == null) {
+			revisions = new EObjectContainmentEList<Revision>(Revision.class, this, SitePackage.PROJECT__REVISIONS);
+		}
+		return revisions;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<ExcavationDesign> getExcavationDesigns() {
+		if (excavationDesigns == null) {
+			excavationDesigns = new EObjectContainmentEList<ExcavationDesign>(ExcavationDesign.class, this, SitePackage.PROJECT__EXCAVATION_DESIGNS);
+		}
+		return excavationDesigns;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<PriceBook> getPriceBooks() {
+		if (priceBooks == null) {
+			priceBooks = new EObjectContainmentEList<PriceBook>(PriceBook.class, this, SitePackage.PROJECT__PRICE_BOOKS);
+		}
+		return priceBooks;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<ColumnTest> getColumnTests() {
+		if (columnTests == null) {
+			columnTests = new EObjectContainmentEList<ColumnTest>(ColumnTest.class, this, SitePackage.PROJECT__COLUMN_TESTS);
+		}
+		return columnTests;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case SitePackage.PROJECT__SITE:
@@ -333,6 +478,14 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return ((InternalEList<?>)getCleanupLevels()).basicRemove(otherEnd, msgs);
 			case SitePackage.PROJECT__FLUSHING_DESIGNS:
 				return ((InternalEList<?>)getFlushingDesigns()).basicRemove(otherEnd, msgs);
+			case SitePackage.PROJECT__REVISIONS:
+				return ((InternalEList<?>)getRevisions()).basicRemove(otherEnd, msgs);
+			case SitePackage.PROJECT__EXCAVATION_DESIGNS:
+				return ((InternalEList<?>)getExcavationDesigns()).basicRemove(otherEnd, msgs);
+			case SitePackage.PROJECT__PRICE_BOOKS:
+				return ((InternalEList<?>)getPriceBooks()).basicRemove(otherEnd, msgs);
+			case SitePackage.PROJECT__COLUMN_TESTS:
+				return ((InternalEList<?>)getColumnTests()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -359,6 +512,16 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return getCleanupLevels();
 			case SitePackage.PROJECT__FLUSHING_DESIGNS:
 				return getFlushingDesigns();
+			case SitePackage.PROJECT__UNIT_SYSTEM:
+				return getUnitSystem();
+			case SitePackage.PROJECT__REVISIONS:
+				return getRevisions();
+			case SitePackage.PROJECT__EXCAVATION_DESIGNS:
+				return getExcavationDesigns();
+			case SitePackage.PROJECT__PRICE_BOOKS:
+				return getPriceBooks();
+			case SitePackage.PROJECT__COLUMN_TESTS:
+				return getColumnTests();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -396,6 +559,25 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				getFlushingDesigns().clear();
 				getFlushingDesigns().addAll((Collection<? extends FlushingDesign>)newValue);
 				return;
+			case SitePackage.PROJECT__UNIT_SYSTEM:
+				setUnitSystem((UnitSystem)newValue);
+				return;
+			case SitePackage.PROJECT__REVISIONS:
+				getRevisions().clear();
+				getRevisions().addAll((Collection<? extends Revision>)newValue);
+				return;
+			case SitePackage.PROJECT__EXCAVATION_DESIGNS:
+				getExcavationDesigns().clear();
+				getExcavationDesigns().addAll((Collection<? extends ExcavationDesign>)newValue);
+				return;
+			case SitePackage.PROJECT__PRICE_BOOKS:
+				getPriceBooks().clear();
+				getPriceBooks().addAll((Collection<? extends PriceBook>)newValue);
+				return;
+			case SitePackage.PROJECT__COLUMN_TESTS:
+				getColumnTests().clear();
+				getColumnTests().addAll((Collection<? extends ColumnTest>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -429,6 +611,21 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 			case SitePackage.PROJECT__FLUSHING_DESIGNS:
 				getFlushingDesigns().clear();
 				return;
+			case SitePackage.PROJECT__UNIT_SYSTEM:
+				setUnitSystem(UNIT_SYSTEM_EDEFAULT);
+				return;
+			case SitePackage.PROJECT__REVISIONS:
+				getRevisions().clear();
+				return;
+			case SitePackage.PROJECT__EXCAVATION_DESIGNS:
+				getExcavationDesigns().clear();
+				return;
+			case SitePackage.PROJECT__PRICE_BOOKS:
+				getPriceBooks().clear();
+				return;
+			case SitePackage.PROJECT__COLUMN_TESTS:
+				getColumnTests().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -455,6 +652,16 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return cleanupLevels != null && !cleanupLevels.isEmpty();
 			case SitePackage.PROJECT__FLUSHING_DESIGNS:
 				return flushingDesigns != null && !flushingDesigns.isEmpty();
+			case SitePackage.PROJECT__UNIT_SYSTEM:
+				return unitSystem != UNIT_SYSTEM_EDEFAULT;
+			case SitePackage.PROJECT__REVISIONS:
+				return revisions != null && !revisions.isEmpty();
+			case SitePackage.PROJECT__EXCAVATION_DESIGNS:
+				return excavationDesigns != null && !excavationDesigns.isEmpty();
+			case SitePackage.PROJECT__PRICE_BOOKS:
+				return priceBooks != null && !priceBooks.isEmpty();
+			case SitePackage.PROJECT__COLUMN_TESTS:
+				return columnTests != null && !columnTests.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}
@@ -475,6 +682,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 		result.append(description);
 		result.append(", schemaVersion: ");
 		result.append(schemaVersion);
+		result.append(", unitSystem: ");
+		result.append(unitSystem);
 		result.append(')');
 		return result.toString();
 	}

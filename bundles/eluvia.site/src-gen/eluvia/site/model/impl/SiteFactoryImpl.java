@@ -65,6 +65,15 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 			case SitePackage.TREATMENT_ZONE: return createTreatmentZone();
 			case SitePackage.SOURCE_CONCENTRATION: return createSourceConcentration();
 			case SitePackage.FLUSHING_DESIGN: return createFlushingDesign();
+			case SitePackage.REVISION: return createRevision();
+			case SitePackage.VERTEX: return createVertex();
+			case SitePackage.SAMPLING_LOCATION: return createSamplingLocation();
+			case SitePackage.SAMPLE: return createSample();
+			case SitePackage.EXCAVATION_DESIGN: return createExcavationDesign();
+			case SitePackage.PRICE_BOOK: return createPriceBook();
+			case SitePackage.PRICE_ITEM: return createPriceItem();
+			case SitePackage.COLUMN_TEST: return createColumnTest();
+			case SitePackage.COLUMN_TEST_POINT: return createColumnTestPoint();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -80,6 +89,22 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 		switch (eDataType.getClassifierID()) {
 			case SitePackage.COMPLIANCE_CRITERION:
 				return createComplianceCriterionFromString(eDataType, initialValue);
+			case SitePackage.UNIT_SYSTEM:
+				return createUnitSystemFromString(eDataType, initialValue);
+			case SitePackage.DISPERSIVITY_RULE:
+				return createDispersivityRuleFromString(eDataType, initialValue);
+			case SitePackage.SORPTION_ISOTHERM:
+				return createSorptionIsothermFromString(eDataType, initialValue);
+			case SitePackage.NONEQUILIBRIUM_ENTRY:
+				return createNonequilibriumEntryFromString(eDataType, initialValue);
+			case SitePackage.COMPLIANCE_STATISTIC:
+				return createComplianceStatisticFromString(eDataType, initialValue);
+			case SitePackage.SOLUTION_METHOD:
+				return createSolutionMethodFromString(eDataType, initialValue);
+			case SitePackage.EXCAVATION_SOIL_TYPE:
+				return createExcavationSoilTypeFromString(eDataType, initialValue);
+			case SitePackage.COLUMN_TEST_KIND:
+				return createColumnTestKindFromString(eDataType, initialValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
 		}
@@ -95,6 +120,22 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 		switch (eDataType.getClassifierID()) {
 			case SitePackage.COMPLIANCE_CRITERION:
 				return convertComplianceCriterionToString(eDataType, instanceValue);
+			case SitePackage.UNIT_SYSTEM:
+				return convertUnitSystemToString(eDataType, instanceValue);
+			case SitePackage.DISPERSIVITY_RULE:
+				return convertDispersivityRuleToString(eDataType, instanceValue);
+			case SitePackage.SORPTION_ISOTHERM:
+				return convertSorptionIsothermToString(eDataType, instanceValue);
+			case SitePackage.NONEQUILIBRIUM_ENTRY:
+				return convertNonequilibriumEntryToString(eDataType, instanceValue);
+			case SitePackage.COMPLIANCE_STATISTIC:
+				return convertComplianceStatisticToString(eDataType, instanceValue);
+			case SitePackage.SOLUTION_METHOD:
+				return convertSolutionMethodToString(eDataType, instanceValue);
+			case SitePackage.EXCAVATION_SOIL_TYPE:
+				return convertExcavationSoilTypeToString(eDataType, instanceValue);
+			case SitePackage.COLUMN_TEST_KIND:
+				return convertColumnTestKindToString(eDataType, instanceValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
 		}
@@ -193,6 +234,105 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@Override
+	public Revision createRevision() {
+		RevisionImpl revision = new RevisionImpl();
+		return revision;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Vertex createVertex() {
+		VertexImpl vertex = new VertexImpl();
+		return vertex;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public SamplingLocation createSamplingLocation() {
+		SamplingLocationImpl samplingLocation = new SamplingLocationImpl();
+		return samplingLocation;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Sample createSample() {
+		SampleImpl sample = new SampleImpl();
+		return sample;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ExcavationDesign createExcavationDesign() {
+		ExcavationDesignImpl excavationDesign = new ExcavationDesignImpl();
+		return excavationDesign;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public PriceBook createPriceBook() {
+		PriceBookImpl priceBook = new PriceBookImpl();
+		return priceBook;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public PriceItem createPriceItem() {
+		PriceItemImpl priceItem = new PriceItemImpl();
+		return priceItem;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ColumnTest createColumnTest() {
+		ColumnTestImpl columnTest = new ColumnTestImpl();
+		return columnTest;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ColumnTestPoint createColumnTestPoint() {
+		ColumnTestPointImpl columnTestPoint = new ColumnTestPointImpl();
+		return columnTestPoint;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	public ComplianceCriterion createComplianceCriterionFromString(EDataType eDataType, String initialValue) {
 		ComplianceCriterion result = ComplianceCriterion.get(initialValue);
 		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
@@ -205,6 +345,166 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 	 * @generated
 	 */
 	public String convertComplianceCriterionToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public UnitSystem createUnitSystemFromString(EDataType eDataType, String initialValue) {
+		UnitSystem result = UnitSystem.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertUnitSystemToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public DispersivityRule createDispersivityRuleFromString(EDataType eDataType, String initialValue) {
+		DispersivityRule result = DispersivityRule.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertDispersivityRuleToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public SorptionIsotherm createSorptionIsothermFromString(EDataType eDataType, String initialValue) {
+		SorptionIsotherm result = SorptionIsotherm.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertSorptionIsothermToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public NonequilibriumEntry createNonequilibriumEntryFromString(EDataType eDataType, String initialValue) {
+		NonequilibriumEntry result = NonequilibriumEntry.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertNonequilibriumEntryToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ComplianceStatistic createComplianceStatisticFromString(EDataType eDataType, String initialValue) {
+		ComplianceStatistic result = ComplianceStatistic.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertComplianceStatisticToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public SolutionMethod createSolutionMethodFromString(EDataType eDataType, String initialValue) {
+		SolutionMethod result = SolutionMethod.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertSolutionMethodToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ExcavationSoilType createExcavationSoilTypeFromString(EDataType eDataType, String initialValue) {
+		ExcavationSoilType result = ExcavationSoilType.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertExcavationSoilTypeToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ColumnTestKind createColumnTestKindFromString(EDataType eDataType, String initialValue) {
+		ColumnTestKind result = ColumnTestKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertColumnTestKindToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

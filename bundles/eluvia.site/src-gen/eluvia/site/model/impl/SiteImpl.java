@@ -2,11 +2,13 @@
  */
 package eluvia.site.model.impl;
 
+import eluvia.site.model.SamplingLocation;
 import eluvia.site.model.Site;
 import eluvia.site.model.SitePackage;
 import eluvia.site.model.SoilLayer;
 import eluvia.site.model.TreatmentZone;
 
+import eluvia.site.model.Vertex;
 import java.util.Collection;
 
 import org.eclipse.emf.common.notify.Notification;
@@ -35,6 +37,10 @@ import org.eclipse.emf.ecore.util.InternalEList;
  *   <li>{@link eluvia.site.model.impl.SiteImpl#getDescription <em>Description</em>}</li>
  *   <li>{@link eluvia.site.model.impl.SiteImpl#getLayers <em>Layers</em>}</li>
  *   <li>{@link eluvia.site.model.impl.SiteImpl#getZones <em>Zones</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SiteImpl#getCoordinateFrame <em>Coordinate Frame</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SiteImpl#getGroundSurfaceElevationMetres <em>Ground Surface Elevation Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SiteImpl#getBoundary <em>Boundary</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SiteImpl#getSamplingLocations <em>Sampling Locations</em>}</li>
  * </ul>
  *
  * @generated
@@ -99,6 +105,66 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 	 * @ordered
 	 */
 	protected EList<TreatmentZone> zones;
+
+	/**
+	 * The default value of the '{@link #getCoordinateFrame() <em>Coordinate Frame</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getCoordinateFrame()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String COORDINATE_FRAME_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getCoordinateFrame() <em>Coordinate Frame</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getCoordinateFrame()
+	 * @generated
+	 * @ordered
+	 */
+	protected String coordinateFrame = COORDINATE_FRAME_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getGroundSurfaceElevationMetres() <em>Ground Surface Elevation Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getGroundSurfaceElevationMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double GROUND_SURFACE_ELEVATION_METRES_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getGroundSurfaceElevationMetres() <em>Ground Surface Elevation Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getGroundSurfaceElevationMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected double groundSurfaceElevationMetres = GROUND_SURFACE_ELEVATION_METRES_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getBoundary() <em>Boundary</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBoundary()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Vertex> boundary;
+
+	/**
+	 * The cached value of the '{@link #getSamplingLocations() <em>Sampling Locations</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSamplingLocations()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<SamplingLocation> samplingLocations;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -197,12 +263,88 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 	 * @generated
 	 */
 	@Override
+	public String getCoordinateFrame() {
+		return coordinateFrame;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setCoordinateFrame(String newCoordinateFrame) {
+		String oldCoordinateFrame = coordinateFrame;
+		coordinateFrame = newCoordinateFrame;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.SITE__COORDINATE_FRAME, oldCoordinateFrame, coordinateFrame));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getGroundSurfaceElevationMetres() {
+		return groundSurfaceElevationMetres;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setGroundSurfaceElevationMetres(double newGroundSurfaceElevationMetres) {
+		double oldGroundSurfaceElevationMetres = groundSurfaceElevationMetres;
+		groundSurfaceElevationMetres = newGroundSurfaceElevationMetres;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.SITE__GROUND_SURFACE_ELEVATION_METRES, oldGroundSurfaceElevationMetres, groundSurfaceElevationMetres));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<Vertex> getBoundary() {
+		if (boundary == null) {
+			boundary = new EObjectContainmentEList<Vertex>(Vertex.class, this, SitePackage.SITE__BOUNDARY);
+		}
+		return boundary;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<SamplingLocation> getSamplingLocations() {
+		if (samplingLocations == null) {
+			samplingLocations = new EObjectContainmentEList<SamplingLocation>(SamplingLocation.class, this, SitePackage.SITE__SAMPLING_LOCATIONS);
+		}
+		return samplingLocations;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case SitePackage.SITE__LAYERS:
 				return ((InternalEList<?>)getLayers()).basicRemove(otherEnd, msgs);
 			case SitePackage.SITE__ZONES:
 				return ((InternalEList<?>)getZones()).basicRemove(otherEnd, msgs);
+			case SitePackage.SITE__BOUNDARY:
+				return ((InternalEList<?>)getBoundary()).basicRemove(otherEnd, msgs);
+			case SitePackage.SITE__SAMPLING_LOCATIONS:
+				return ((InternalEList<?>)getSamplingLocations()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -223,6 +365,14 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 				return getLayers();
 			case SitePackage.SITE__ZONES:
 				return getZones();
+			case SitePackage.SITE__COORDINATE_FRAME:
+				return getCoordinateFrame();
+			case SitePackage.SITE__GROUND_SURFACE_ELEVATION_METRES:
+				return getGroundSurfaceElevationMetres();
+			case SitePackage.SITE__BOUNDARY:
+				return getBoundary();
+			case SitePackage.SITE__SAMPLING_LOCATIONS:
+				return getSamplingLocations();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -250,6 +400,20 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 				getZones().clear();
 				getZones().addAll((Collection<? extends TreatmentZone>)newValue);
 				return;
+			case SitePackage.SITE__COORDINATE_FRAME:
+				setCoordinateFrame((String)newValue);
+				return;
+			case SitePackage.SITE__GROUND_SURFACE_ELEVATION_METRES:
+				setGroundSurfaceElevationMetres((Double)newValue);
+				return;
+			case SitePackage.SITE__BOUNDARY:
+				getBoundary().clear();
+				getBoundary().addAll((Collection<? extends Vertex>)newValue);
+				return;
+			case SitePackage.SITE__SAMPLING_LOCATIONS:
+				getSamplingLocations().clear();
+				getSamplingLocations().addAll((Collection<? extends SamplingLocation>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -274,6 +438,18 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 			case SitePackage.SITE__ZONES:
 				getZones().clear();
 				return;
+			case SitePackage.SITE__COORDINATE_FRAME:
+				setCoordinateFrame(COORDINATE_FRAME_EDEFAULT);
+				return;
+			case SitePackage.SITE__GROUND_SURFACE_ELEVATION_METRES:
+				setGroundSurfaceElevationMetres(GROUND_SURFACE_ELEVATION_METRES_EDEFAULT);
+				return;
+			case SitePackage.SITE__BOUNDARY:
+				getBoundary().clear();
+				return;
+			case SitePackage.SITE__SAMPLING_LOCATIONS:
+				getSamplingLocations().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -294,6 +470,14 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 				return layers != null && !layers.isEmpty();
 			case SitePackage.SITE__ZONES:
 				return zones != null && !zones.isEmpty();
+			case SitePackage.SITE__COORDINATE_FRAME:
+				return COORDINATE_FRAME_EDEFAULT == null ? coordinateFrame != null : !COORDINATE_FRAME_EDEFAULT.equals(coordinateFrame);
+			case SitePackage.SITE__GROUND_SURFACE_ELEVATION_METRES:
+				return groundSurfaceElevationMetres != GROUND_SURFACE_ELEVATION_METRES_EDEFAULT;
+			case SitePackage.SITE__BOUNDARY:
+				return boundary != null && !boundary.isEmpty();
+			case SitePackage.SITE__SAMPLING_LOCATIONS:
+				return samplingLocations != null && !samplingLocations.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}
@@ -312,6 +496,10 @@ public class SiteImpl extends MinimalEObjectImpl.Container implements Site {
 		result.append(name);
 		result.append(", description: ");
 		result.append(description);
+		result.append(", coordinateFrame: ");
+		result.append(coordinateFrame);
+		result.append(", groundSurfaceElevationMetres: ");
+		result.append(groundSurfaceElevationMetres);
 		result.append(')');
 		return result.toString();
 	}

@@ -2,6 +2,7 @@
  */
 package eluvia.site.model.impl;
 
+import eluvia.site.model.DispersivityRule;
 import eluvia.site.model.SitePackage;
 import eluvia.site.model.SoilLayer;
 
@@ -30,6 +31,11 @@ import org.eclipse.emf.ecore.impl.MinimalEObjectImpl;
  *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getOrganicCarbonFraction <em>Organic Carbon Fraction</em>}</li>
  *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getSaturatedConductivityMetresPerDay <em>Saturated Conductivity Metres Per Day</em>}</li>
  *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getDispersivityMetres <em>Dispersivity Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getSwellFactor <em>Swell Factor</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getShrinkageFactor <em>Shrinkage Factor</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getDispersivityRule <em>Dispersivity Rule</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getDispersivityScaleMetres <em>Dispersivity Scale Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.SoilLayerImpl#getEffectiveDispersivityMetres <em>Effective Dispersivity Metres</em>}</li>
  * </ul>
  *
  * @generated
@@ -234,6 +240,96 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 	 * @ordered
 	 */
 	protected double dispersivityMetres = DISPERSIVITY_METRES_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getSwellFactor() <em>Swell Factor</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSwellFactor()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double SWELL_FACTOR_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getSwellFactor() <em>Swell Factor</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSwellFactor()
+	 * @generated
+	 * @ordered
+	 */
+	protected double swellFactor = SWELL_FACTOR_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getShrinkageFactor() <em>Shrinkage Factor</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getShrinkageFactor()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double SHRINKAGE_FACTOR_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getShrinkageFactor() <em>Shrinkage Factor</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getShrinkageFactor()
+	 * @generated
+	 * @ordered
+	 */
+	protected double shrinkageFactor = SHRINKAGE_FACTOR_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getDispersivityRule() <em>Dispersivity Rule</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getDispersivityRule()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final DispersivityRule DISPERSIVITY_RULE_EDEFAULT = DispersivityRule.ENTERED;
+
+	/**
+	 * The cached value of the '{@link #getDispersivityRule() <em>Dispersivity Rule</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getDispersivityRule()
+	 * @generated
+	 * @ordered
+	 */
+	protected DispersivityRule dispersivityRule = DISPERSIVITY_RULE_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getDispersivityScaleMetres() <em>Dispersivity Scale Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getDispersivityScaleMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double DISPERSIVITY_SCALE_METRES_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getDispersivityScaleMetres() <em>Dispersivity Scale Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getDispersivityScaleMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected double dispersivityScaleMetres = DISPERSIVITY_SCALE_METRES_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getEffectiveDispersivityMetres() <em>Effective Dispersivity Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getEffectiveDispersivityMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double EFFECTIVE_DISPERSIVITY_METRES_EDEFAULT = 0.0;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -490,6 +586,108 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 	 * @generated
 	 */
 	@Override
+	public double getSwellFactor() {
+		return swellFactor;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setSwellFactor(double newSwellFactor) {
+		double oldSwellFactor = swellFactor;
+		swellFactor = newSwellFactor;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.SOIL_LAYER__SWELL_FACTOR, oldSwellFactor, swellFactor));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getShrinkageFactor() {
+		return shrinkageFactor;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setShrinkageFactor(double newShrinkageFactor) {
+		double oldShrinkageFactor = shrinkageFactor;
+		shrinkageFactor = newShrinkageFactor;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.SOIL_LAYER__SHRINKAGE_FACTOR, oldShrinkageFactor, shrinkageFactor));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public DispersivityRule getDispersivityRule() {
+		return dispersivityRule;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setDispersivityRule(DispersivityRule newDispersivityRule) {
+		DispersivityRule oldDispersivityRule = dispersivityRule;
+		dispersivityRule = newDispersivityRule == null ? DISPERSIVITY_RULE_EDEFAULT : newDispersivityRule;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.SOIL_LAYER__DISPERSIVITY_RULE, oldDispersivityRule, dispersivityRule));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getDispersivityScaleMetres() {
+		return dispersivityScaleMetres;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setDispersivityScaleMetres(double newDispersivityScaleMetres) {
+		double oldDispersivityScaleMetres = dispersivityScaleMetres;
+		dispersivityScaleMetres = newDispersivityScaleMetres;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.SOIL_LAYER__DISPERSIVITY_SCALE_METRES, oldDispersivityScaleMetres, dispersivityScaleMetres));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getEffectiveDispersivityMetres() {
+		return eluvia.site.derived.Dispersivities.effectiveDispersivityMetres(this);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case SitePackage.SOIL_LAYER__NAME:
@@ -512,6 +710,16 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 				return getSaturatedConductivityMetresPerDay();
 			case SitePackage.SOIL_LAYER__DISPERSIVITY_METRES:
 				return getDispersivityMetres();
+			case SitePackage.SOIL_LAYER__SWELL_FACTOR:
+				return getSwellFactor();
+			case SitePackage.SOIL_LAYER__SHRINKAGE_FACTOR:
+				return getShrinkageFactor();
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_RULE:
+				return getDispersivityRule();
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_SCALE_METRES:
+				return getDispersivityScaleMetres();
+			case SitePackage.SOIL_LAYER__EFFECTIVE_DISPERSIVITY_METRES:
+				return getEffectiveDispersivityMetres();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -553,6 +761,18 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 				return;
 			case SitePackage.SOIL_LAYER__DISPERSIVITY_METRES:
 				setDispersivityMetres((Double)newValue);
+				return;
+			case SitePackage.SOIL_LAYER__SWELL_FACTOR:
+				setSwellFactor((Double)newValue);
+				return;
+			case SitePackage.SOIL_LAYER__SHRINKAGE_FACTOR:
+				setShrinkageFactor((Double)newValue);
+				return;
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_RULE:
+				setDispersivityRule((DispersivityRule)newValue);
+				return;
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_SCALE_METRES:
+				setDispersivityScaleMetres((Double)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -596,6 +816,18 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 			case SitePackage.SOIL_LAYER__DISPERSIVITY_METRES:
 				setDispersivityMetres(DISPERSIVITY_METRES_EDEFAULT);
 				return;
+			case SitePackage.SOIL_LAYER__SWELL_FACTOR:
+				setSwellFactor(SWELL_FACTOR_EDEFAULT);
+				return;
+			case SitePackage.SOIL_LAYER__SHRINKAGE_FACTOR:
+				setShrinkageFactor(SHRINKAGE_FACTOR_EDEFAULT);
+				return;
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_RULE:
+				setDispersivityRule(DISPERSIVITY_RULE_EDEFAULT);
+				return;
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_SCALE_METRES:
+				setDispersivityScaleMetres(DISPERSIVITY_SCALE_METRES_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -628,6 +860,16 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 				return saturatedConductivityMetresPerDay != SATURATED_CONDUCTIVITY_METRES_PER_DAY_EDEFAULT;
 			case SitePackage.SOIL_LAYER__DISPERSIVITY_METRES:
 				return dispersivityMetres != DISPERSIVITY_METRES_EDEFAULT;
+			case SitePackage.SOIL_LAYER__SWELL_FACTOR:
+				return swellFactor != SWELL_FACTOR_EDEFAULT;
+			case SitePackage.SOIL_LAYER__SHRINKAGE_FACTOR:
+				return shrinkageFactor != SHRINKAGE_FACTOR_EDEFAULT;
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_RULE:
+				return dispersivityRule != DISPERSIVITY_RULE_EDEFAULT;
+			case SitePackage.SOIL_LAYER__DISPERSIVITY_SCALE_METRES:
+				return dispersivityScaleMetres != DISPERSIVITY_SCALE_METRES_EDEFAULT;
+			case SitePackage.SOIL_LAYER__EFFECTIVE_DISPERSIVITY_METRES:
+				return getEffectiveDispersivityMetres() != EFFECTIVE_DISPERSIVITY_METRES_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
 	}
@@ -662,6 +904,14 @@ public class SoilLayerImpl extends MinimalEObjectImpl.Container implements SoilL
 		result.append(saturatedConductivityMetresPerDay);
 		result.append(", dispersivityMetres: ");
 		result.append(dispersivityMetres);
+		result.append(", swellFactor: ");
+		result.append(swellFactor);
+		result.append(", shrinkageFactor: ");
+		result.append(shrinkageFactor);
+		result.append(", dispersivityRule: ");
+		result.append(dispersivityRule);
+		result.append(", dispersivityScaleMetres: ");
+		result.append(dispersivityScaleMetres);
 		result.append(')');
 		return result.toString();
 	}

@@ -6,6 +6,7 @@ import eluvia.site.model.SitePackage;
 import eluvia.site.model.SourceConcentration;
 import eluvia.site.model.TreatmentZone;
 
+import eluvia.site.model.Vertex;
 import java.util.Collection;
 
 import org.eclipse.emf.common.notify.Notification;
@@ -35,6 +36,10 @@ import org.eclipse.emf.ecore.util.InternalEList;
  *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getTopDepthMetres <em>Top Depth Metres</em>}</li>
  *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getBottomDepthMetres <em>Bottom Depth Metres</em>}</li>
  *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getSourceConcentrations <em>Source Concentrations</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getFootprint <em>Footprint</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getEffectiveAreaSquareMetres <em>Effective Area Square Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getVolumeCubicMetres <em>Volume Cubic Metres</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.TreatmentZoneImpl#getPoreVolumeCubicMetres <em>Pore Volume Cubic Metres</em>}</li>
  * </ul>
  *
  * @generated
@@ -129,6 +134,46 @@ public class TreatmentZoneImpl extends MinimalEObjectImpl.Container implements T
 	 * @ordered
 	 */
 	protected EList<SourceConcentration> sourceConcentrations;
+
+	/**
+	 * The cached value of the '{@link #getFootprint() <em>Footprint</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getFootprint()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Vertex> footprint;
+
+	/**
+	 * The default value of the '{@link #getEffectiveAreaSquareMetres() <em>Effective Area Square Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getEffectiveAreaSquareMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double EFFECTIVE_AREA_SQUARE_METRES_EDEFAULT = 0.0;
+
+	/**
+	 * The default value of the '{@link #getVolumeCubicMetres() <em>Volume Cubic Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getVolumeCubicMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double VOLUME_CUBIC_METRES_EDEFAULT = 0.0;
+
+	/**
+	 * The default value of the '{@link #getPoreVolumeCubicMetres() <em>Pore Volume Cubic Metres</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPoreVolumeCubicMetres()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double PORE_VOLUME_CUBIC_METRES_EDEFAULT = 0.0;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -260,10 +305,55 @@ public class TreatmentZoneImpl extends MinimalEObjectImpl.Container implements T
 	 * @generated
 	 */
 	@Override
+	public EList<Vertex> getFootprint() {
+		if (footprint == null) {
+			footprint = new EObjectContainmentEList<Vertex>(Vertex.class, this, SitePackage.TREATMENT_ZONE__FOOTPRINT);
+		}
+		return footprint;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getEffectiveAreaSquareMetres() {
+		return eluvia.site.derived.ZoneGeometry.effectiveAreaSquareMetres(this);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getVolumeCubicMetres() {
+		return eluvia.site.derived.ZoneGeometry.volumeCubicMetres(this);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getPoreVolumeCubicMetres() {
+		return eluvia.site.derived.ZoneGeometry.poreVolumeCubicMetres(this);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case SitePackage.TREATMENT_ZONE__SOURCE_CONCENTRATIONS:
 				return ((InternalEList<?>)getSourceConcentrations()).basicRemove(otherEnd, msgs);
+			case SitePackage.TREATMENT_ZONE__FOOTPRINT:
+				return ((InternalEList<?>)getFootprint()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -286,6 +376,14 @@ public class TreatmentZoneImpl extends MinimalEObjectImpl.Container implements T
 				return getBottomDepthMetres();
 			case SitePackage.TREATMENT_ZONE__SOURCE_CONCENTRATIONS:
 				return getSourceConcentrations();
+			case SitePackage.TREATMENT_ZONE__FOOTPRINT:
+				return getFootprint();
+			case SitePackage.TREATMENT_ZONE__EFFECTIVE_AREA_SQUARE_METRES:
+				return getEffectiveAreaSquareMetres();
+			case SitePackage.TREATMENT_ZONE__VOLUME_CUBIC_METRES:
+				return getVolumeCubicMetres();
+			case SitePackage.TREATMENT_ZONE__PORE_VOLUME_CUBIC_METRES:
+				return getPoreVolumeCubicMetres();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -315,6 +413,10 @@ public class TreatmentZoneImpl extends MinimalEObjectImpl.Container implements T
 				getSourceConcentrations().clear();
 				getSourceConcentrations().addAll((Collection<? extends SourceConcentration>)newValue);
 				return;
+			case SitePackage.TREATMENT_ZONE__FOOTPRINT:
+				getFootprint().clear();
+				getFootprint().addAll((Collection<? extends Vertex>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -342,6 +444,9 @@ public class TreatmentZoneImpl extends MinimalEObjectImpl.Container implements T
 			case SitePackage.TREATMENT_ZONE__SOURCE_CONCENTRATIONS:
 				getSourceConcentrations().clear();
 				return;
+			case SitePackage.TREATMENT_ZONE__FOOTPRINT:
+				getFootprint().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -364,6 +469,14 @@ public class TreatmentZoneImpl extends MinimalEObjectImpl.Container implements T
 				return bottomDepthMetres != BOTTOM_DEPTH_METRES_EDEFAULT;
 			case SitePackage.TREATMENT_ZONE__SOURCE_CONCENTRATIONS:
 				return sourceConcentrations != null && !sourceConcentrations.isEmpty();
+			case SitePackage.TREATMENT_ZONE__FOOTPRINT:
+				return footprint != null && !footprint.isEmpty();
+			case SitePackage.TREATMENT_ZONE__EFFECTIVE_AREA_SQUARE_METRES:
+				return getEffectiveAreaSquareMetres() != EFFECTIVE_AREA_SQUARE_METRES_EDEFAULT;
+			case SitePackage.TREATMENT_ZONE__VOLUME_CUBIC_METRES:
+				return getVolumeCubicMetres() != VOLUME_CUBIC_METRES_EDEFAULT;
+			case SitePackage.TREATMENT_ZONE__PORE_VOLUME_CUBIC_METRES:
+				return getPoreVolumeCubicMetres() != PORE_VOLUME_CUBIC_METRES_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
 	}

@@ -100,6 +100,42 @@ public class SiteAdapterFactory extends AdapterFactoryImpl {
 				return createFlushingDesignAdapter();
 			}
 			@Override
+			public Adapter caseRevision(Revision object) {
+				return createRevisionAdapter();
+			}
+			@Override
+			public Adapter caseVertex(Vertex object) {
+				return createVertexAdapter();
+			}
+			@Override
+			public Adapter caseSamplingLocation(SamplingLocation object) {
+				return createSamplingLocationAdapter();
+			}
+			@Override
+			public Adapter caseSample(Sample object) {
+				return createSampleAdapter();
+			}
+			@Override
+			public Adapter caseExcavationDesign(ExcavationDesign object) {
+				return createExcavationDesignAdapter();
+			}
+			@Override
+			public Adapter casePriceBook(PriceBook object) {
+				return createPriceBookAdapter();
+			}
+			@Override
+			public Adapter casePriceItem(PriceItem object) {
+				return createPriceItemAdapter();
+			}
+			@Override
+			public Adapter caseColumnTest(ColumnTest object) {
+				return createColumnTestAdapter();
+			}
+			@Override
+			public Adapter caseColumnTestPoint(ColumnTestPoint object) {
+				return createColumnTestPointAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -228,6 +264,132 @@ public class SiteAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createFlushingDesignAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.Revision <em>Revision</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.Revision
+	 * @generated
+	 */
+	public Adapter createRevisionAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.Vertex <em>Vertex</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.Vertex
+	 * @generated
+	 */
+	public Adapter createVertexAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.SamplingLocation <em>Sampling Location</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.SamplingLocation
+	 * @generated
+	 */
+	public Adapter createSamplingLocationAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.Sample <em>Sample</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.Sample
+	 * @generated
+	 */
+	public Adapter createSampleAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.ExcavationDesign <em>Excavation Design</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.ExcavationDesign
+	 * @generated
+	 */
+	public Adapter createExcavationDesignAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.PriceBook <em>Price Book</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.PriceBook
+	 * @generated
+	 */
+	public Adapter createPriceBookAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.PriceItem <em>Price Item</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.PriceItem
+	 * @generated
+	 */
+	public Adapter createPriceItemAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.ColumnTest <em>Column Test</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.ColumnTest
+	 * @generated
+	 */
+	public Adapter createColumnTestAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.ColumnTestPoint <em>Column Test Point</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.ColumnTestPoint
+	 * @generated
+	 */
+	public Adapter createColumnTestPointAdapter() {
 		return null;
 	}
 

@@ -122,7 +122,12 @@ public final class RegenerateSiteCode {
         check(generator.generate(genModel, GenBaseGeneratorAdapter.EDIT_PROJECT_TYPE, new BasicMonitor.Printing(System.out)));
         replaceTree(scratchEdit.resolve("src-gen"), editBundle.resolve("src-gen"));
         replaceTree(scratchEdit.resolve("icons"), editBundle.resolve("icons"));
-        copyFile(scratchEdit.resolve("plugin.properties"), editBundle.resolve("plugin.properties"));
+        Path properties = scratchEdit.resolve("plugin.properties");
+        // The generator's template names a placeholder vendor; state ours.
+        String text = Files.readString(properties)
+            .replaceAll("(?m)^pluginName = .*$", "pluginName = Eluvia site model editing support")
+            .replaceAll("(?m)^providerName = .*$", "providerName = Eluvia");
+        Files.writeString(editBundle.resolve("plugin.properties"), text);
         System.out.println("edit code written to " + editBundle.resolve("src-gen"));
       } else {
         System.out.println("no " + EDIT_BUNDLE + " bundle yet: edit code not generated");
