@@ -16,6 +16,14 @@ import eluvia.transport.TransportInputException;
  * difference), and the step is rejected and retried when the error exceeds
  * {@link #stepTolerance()} times (|C| + the concentration floor) in any cell. Setting the minimum,
  * initial and maximum step equal gives fixed steps.
+ *
+ * <p>Accuracy of the defaults, measured against the exact finite-layer series: pore volumes to
+ * target within 2e-4 to 5.5e-4 (relative) for layer Peclet numbers 1 to 100 and targets 0.01 to
+ * 1e-4. The tolerance bounds each step's local error; the errors of the many small early steps
+ * (the inlet front) are damped by the scheme, so the accuracy at the target is mostly set by the
+ * later, larger steps. For that reason fixed steps are often as accurate for fewer steps (0.01
+ * pore volumes gave 5e-5 at Peclet 10), and the maximum step is worth lowering when high
+ * accuracy is wanted.
  */
 public final class SolverSettings {
     private final int minimumCellsPerLayer;
@@ -197,7 +205,7 @@ public final class SolverSettings {
         private double initialStepPoreVolumes = 1e-4;
         private double minimumStepPoreVolumes = 1e-9;
         private double maximumStepPoreVolumes = 0.05;
-        private double stepTolerance = 1e-4;
+        private double stepTolerance = 1e-5;
         private double concentrationFloorFraction = 1e-6;
         private double newtonRelativeTolerance = 1e-9;
         private int maximumNewtonIterations = 60;
@@ -261,7 +269,7 @@ public final class SolverSettings {
             return this;
         }
 
-        /** Local error tolerance per step, relative (default 1e-4). */
+        /** Local error tolerance per step, relative (default 1e-5). */
         public Builder stepTolerance(double value) {
             stepTolerance = value;
             return this;
