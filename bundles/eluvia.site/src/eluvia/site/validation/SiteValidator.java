@@ -11,6 +11,7 @@ import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 
 import eluvia.site.files.ProjectFiles;
+import eluvia.site.library.CasNumbers;
 import eluvia.site.model.CleanupLevel;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.FlushingDesign;
@@ -395,22 +396,9 @@ public final class SiteValidator {
         return null;
     }
 
-    /**
-     * True when the text is a CAS registry number whose check digit is right: the last digit equals
-     * the sum of the other digits, each times its position counted from the right, modulo 10
-     * (the CAS registry's published rule).
-     */
+    /** True when the text is a CAS registry number with a correct check digit (see {@link CasNumbers}). */
     static boolean isValidCasNumber(String cas) {
-        if (!cas.matches("\\d{2,7}-\\d{2}-\\d")) {
-            return false;
-        }
-        String digits = cas.replace("-", "");
-        int check = digits.charAt(digits.length() - 1) - '0';
-        int sum = 0;
-        for (int i = digits.length() - 2, position = 1; i >= 0; i--, position++) {
-            sum += (digits.charAt(i) - '0') * position;
-        }
-        return sum % 10 == check;
+        return CasNumbers.isValid(cas);
     }
 
     private boolean atLeast(EObject object, String label, String field, double value, double minimum,
