@@ -77,11 +77,18 @@ public final class NumericalFlushingSolver {
     private final boolean allLinear;
     private final boolean anyImmobile;
     private final boolean[] immobile;
+    /** Linear sorption only: storage and decay per unit concentration, mobile and immobile. */
+    private final double[] capM;
+    private final double[] capIm;
+    private final double[] decM;
+    private final double[] decIm;
+    private final double[] invRhoB;
     private final double[] lo;
     private final double[] dg;
     private final double[] up;
     private final double src0;
     private final int upwindFaces;
+    private final int refinement;
 
     private final double[] initialC;
     private final double initialMaxC;
@@ -110,6 +117,12 @@ public final class NumericalFlushingSolver {
     private final double[] imGain;
     private final double[] imInv;
     private final double[] resIm;
+    private final double[] wc;
+    private final double[] sc;
+    private final double[] wci;
+    private final double[] sci;
+    private final double[] hd;
+    private final double[] diagonal;
     private double cachedStep = Double.NaN;
     private double cachedA0 = Double.NaN;
     private int lastNewtonIterations;
@@ -121,6 +134,14 @@ public final class NumericalFlushingSolver {
      *         or a per-cell initial condition has the wrong length
      */
     public NumericalFlushingSolver(FlushingColumn column, SolverSettings settings) {
+        this(column, settings, 1);
+    }
+
+    /**
+     * As the public constructor, with every cell of the grid the settings give split into
+     * {@code refinement} equal cells (Richardson extrapolation, {@link ExtrapolatedTargetSearch}).
+     */
+    NumericalFlushingSolver(FlushingColumn column, SolverSettings settings, int refinement) {
         if (column == null) {
             throw new TransportInputException("flushing column", null, "a column");
         }
@@ -133,11 +154,17 @@ public final class NumericalFlushingSolver {
         this.inflow = column.inflowMilligramsPerLitre();
         List<SoilLayer> layers = column.layers();
         int[] counts = cellCounts(layers, settings, q);
-        int total = 0;
-        for (int k : counts) {
-            total += k;
+        long total = 0;
+        for (int l = 0; l < counts.length; l++) {
+            counts[l] *= refinement;
+            total += counts[l];
         }
-        n = total;
+        if (total > settings.maximumCellCount()) {
+            throw new TransportInputException("number of cells", total, "at most the maximum cell count "
+                    + settings.maximumCellCount() + " (refinement " + refinement + "; allow more cells)");
+        }
+        n = (int) total;
+        this.refinement = refinement;
         dz = new double[n];
         depth = new double[n];
         layerOfCell = new int[n];
@@ -199,6 +226,20 @@ public final class NumericalFlushingSolver {
         }
         allLinear = linear;
         anyImmobile = twoRegion;
+        capM = new double[n];
+        capIm = new double[n];
+        decM = new double[n];
+        decIm = new double[n];
+        invRhoB = new double[n];
+        for (int k = 0; k < n; k++) {
+            invRhoB[k] = 1 / rhoB[k];
+            if (kind[k] == LINEAR) {
+                capM[k] = thetaM[k] + rhoM[k] * p1[k];
+                capIm[k] = thetaIm[k] + rhoIm[k] * p1[k];
+                decM[k] = muW[k] * thetaM[k] + muS[k] * rhoM[k] * p1[k];
+                decIm[k] = muW[k] * thetaIm[k] + muS[k] * rhoIm[k] * p1[k];
+            }
+        }
 
         lo = new double[n];
         dg = new double[n];
@@ -260,6 +301,12 @@ public final class NumericalFlushingSolver {
         imGain = new double[n];
         imInv = new double[n];
         resIm = new double[n];
+        wc = new double[n];
+        sc = new double[n];
+        wci = new double[n];
+        sci = new double[n];
+        hd = new double[n];
+        diagonal = new double[n];
     }
 
     private static int[] cellCounts(List<SoilLayer> layers, SolverSettings settings, double q) {
@@ -308,12 +355,12 @@ public final class NumericalFlushingSolver {
         double[] out = new double[n];
         switch (ic.kind()) {
             case PORE_WATER_PER_CELL -> {
-                if (ic.size() != n) {
+                if (ic.size() * refinement != n) {
                     throw new TransportInputException("number of initial pore-water concentrations", ic.size(),
-                            "exactly one per cell (" + n + "; see cellCount())");
+                            "exactly one per cell (" + n / refinement + "; see cellCount())");
                 }
                 for (int k = 0; k < n; k++) {
-                    out[k] = ic.value(k);
+                    out[k] = ic.value(k / refinement);
                 }
             }
             case PORE_WATER_PER_LAYER -> {
@@ -493,20 +540,20 @@ public final class NumericalFlushingSolver {
                 a1 = 1 + w;
                 a2 = w * w / (1 + w);
             }
-            for (int i = 0; i < n; i++) {
-                histM[i] = a1 * m[i] - a2 * mPrev[i];
-            }
-            if (anyImmobile) {
-                for (int i = 0; i < n; i++) {
-                    histIm[i] = a1 * mim[i] - a2 * mimPrev[i];
-                }
-            }
             boolean solved;
             if (allLinear) {
-                solveLinear(hTry, a0);
+                solveLinear(hTry, a0, a1, a2);
                 solved = true;
             } else {
-                solved = solveNewton(hTry, a0, newtonAbs);
+                for (int i = 0; i < n; i++) {
+                    histM[i] = a1 * m[i] - a2 * mPrev[i];
+                }
+                if (anyImmobile) {
+                    for (int i = 0; i < n; i++) {
+                        histIm[i] = a1 * mim[i] - a2 * mimPrev[i];
+                    }
+                }
+                solved = solveNewton(hTry, a0, accepted == 0 ? 0 : hTry / hPrev, accepted >= 1, newtonAbs);
                 newtonTotal += lastNewtonIterations;
             }
             if (!solved) {
@@ -535,6 +582,34 @@ public final class NumericalFlushingSolver {
             double newMass = 0;
             double decayRate = 0;
             double maxSoil = 0;
+            if (allLinear && !anyImmobile) {
+                for (int i = 0; i < n; i++) {
+                    double ci = cNew[i];
+                    double mi = capM[i] * ci;
+                    mNew[i] = mi;
+                    newMass += mi * dz[i];
+                    decayRate += decM[i] * ci * dz[i];
+                    double soil = mi * invRhoB[i];
+                    if (soil > maxSoil) {
+                        maxSoil = soil;
+                    }
+                }
+            } else if (allLinear) {
+                for (int i = 0; i < n; i++) {
+                    double ci = cNew[i];
+                    double cj = cimNew[i];
+                    double mi = capM[i] * ci;
+                    double mj = capIm[i] * cj;
+                    mNew[i] = mi;
+                    mimNew[i] = mj;
+                    newMass += (mi + mj) * dz[i];
+                    decayRate += (decM[i] * ci + decIm[i] * cj) * dz[i];
+                    double soil = (mi + mj) * invRhoB[i];
+                    if (soil > maxSoil) {
+                        maxSoil = soil;
+                    }
+                }
+            } else {
             for (int i = 0; i < n; i++) {
                 double ci = cNew[i];
                 double mi;
@@ -560,10 +635,11 @@ public final class NumericalFlushingSolver {
                 }
                 newMass += tot * dz[i];
                 decayRate += di * dz[i];
-                double soil = tot / rhoB[i];
+                double soil = tot * invRhoB[i];
                 if (soil > maxSoil) {
                     maxSoil = soil;
                 }
+            }
             }
             eIn = (hTry * q * inflow + a2 * eIn) / a0;
             eOut = (hTry * q * cNew[n - 1] + a2 * eOut) / a0;
@@ -742,8 +818,11 @@ public final class NumericalFlushingSolver {
         return BDF2_ERROR_CONSTANT * max;
     }
 
-    /** One implicit step with linear sorption: a single tridiagonal solve. */
-    private void solveLinear(double h, double a0) {
+    /**
+     * One implicit step with linear sorption: a single tridiagonal solve, the BDF2 history
+     * a1 M^n - a2 M^(n-1) formed on the fly.
+     */
+    private void solveLinear(double h, double a0, double a1, double a2) {
         if (h != cachedStep || a0 != cachedA0) {
             double prevUp = 0;
             for (int i = 0; i < n; i++) {
@@ -770,21 +849,34 @@ public final class NumericalFlushingSolver {
             cachedA0 = a0;
         }
         double[] x = cNew;
-        double y = (histM[0] + h * src0 + (anyImmobile ? imGain[0] * histIm[0] : 0)) * factorInv[0];
-        x[0] = y;
+        double[] mm = m;
+        double[] mp = mPrev;
+        double[] inv = factorInv;
+        double[] low = lower;
         if (anyImmobile) {
+            double[] mj = mim;
+            double[] mjp = mimPrev;
+            double histJ = a1 * mj[0] - a2 * mjp[0];
+            histIm[0] = histJ;
+            double y = (a1 * mm[0] - a2 * mp[0] + h * src0 + imGain[0] * histJ) * inv[0];
+            x[0] = y;
             for (int i = 1; i < n; i++) {
-                y = (histM[i] + imGain[i] * histIm[i] - lower[i] * y) * factorInv[i];
+                histJ = a1 * mj[i] - a2 * mjp[i];
+                histIm[i] = histJ;
+                y = (a1 * mm[i] - a2 * mp[i] + imGain[i] * histJ - low[i] * y) * inv[i];
                 x[i] = y;
             }
         } else {
+            double y = (a1 * mm[0] - a2 * mp[0] + h * src0) * inv[0];
+            x[0] = y;
             for (int i = 1; i < n; i++) {
-                y = (histM[i] - lower[i] * y) * factorInv[i];
+                y = (a1 * mm[i] - a2 * mp[i] - low[i] * y) * inv[i];
                 x[i] = y;
             }
         }
+        double[] fu = factorUp;
         for (int i = n - 2; i >= 0; i--) {
-            x[i] -= factorUp[i] * x[i + 1];
+            x[i] -= fu[i] * x[i + 1];
         }
         if (anyImmobile) {
             for (int i = 0; i < n; i++) {
@@ -793,20 +885,40 @@ public final class NumericalFlushingSolver {
         }
     }
 
-    /** One implicit step with nonlinear sorption: Newton's method, one tridiagonal solve per iteration. */
-    private boolean solveNewton(double h, double a0, double abs) {
+    /**
+     * One implicit step with nonlinear sorption: Newton's method, one tridiagonal solve per
+     * iteration, started from the linear extrapolation of the last two states (kept at or above
+     * a quarter of the present value: concentrations only fall towards zero, by decay or
+     * flushing, and a Freundlich slope is steep there), which saves about one iteration a step.
+     */
+    private boolean solveNewton(double h, double a0, double w, boolean extrapolate, double abs) {
         double relTol = settings.newtonRelativeTolerance();
         int maxIt = settings.maximumNewtonIterations();
-        System.arraycopy(c, 0, cNew, 0, n);
+        for (int i = 0; i < n; i++) {
+            wc[i] = thetaM[i] * (a0 + h * muW[i]);
+            sc[i] = rhoM[i] * (a0 + h * muS[i]);
+            lower[i] = h * lo[i];
+            upper[i] = h * up[i];
+            hd[i] = h * dg[i];
+            double guess = c[i];
+            if (extrapolate) {
+                guess = Math.max(c[i] + w * (c[i] - cPrev[i]), 0.25 * c[i]);
+            }
+            cNew[i] = guess;
+        }
         if (anyImmobile) {
-            System.arraycopy(cim, 0, cimNew, 0, n);
+            for (int i = 0; i < n; i++) {
+                wci[i] = thetaIm[i] * (a0 + h * muW[i]);
+                sci[i] = rhoIm[i] * (a0 + h * muS[i]);
+                cimNew[i] = cim[i];
+            }
         }
         cachedStep = Double.NaN;
+        double hSrc = h * src0;
+        double previousSize = Double.POSITIVE_INFINITY;
         for (int it = 1; it <= maxIt; it++) {
             for (int i = 0; i < n; i++) {
                 double ci = cNew[i];
-                double waterCoef = thetaM[i] * (a0 + h * muW[i]);
-                double solidCoef = rhoM[i] * (a0 + h * muS[i]);
                 double s;
                 double ds;
                 switch (kind[i]) {
@@ -830,39 +942,41 @@ public final class NumericalFlushingSolver {
                         ds = p1[i] * p2[i] / (d * d);
                     }
                 }
-                double transport = dg[i] * ci + (i > 0 ? lo[i] * cNew[i - 1] : 0)
-                        + (i + 1 < n ? up[i] * cNew[i + 1] : 0);
-                double r = waterCoef * ci + solidCoef * s - histM[i] + h * transport;
-                double diag = waterCoef + solidCoef * ds + h * dg[i];
-                if (i == 0) {
-                    r -= h * src0;
+                double transport = hd[i] * ci;
+                if (i > 0) {
+                    transport += lower[i] * cNew[i - 1];
                 }
-                if (immobile[i]) {
+                if (i + 1 < n) {
+                    transport += upper[i] * cNew[i + 1];
+                }
+                rhs[i] = histM[i] - wc[i] * ci - sc[i] * s - transport;
+                diagonal[i] = wc[i] + sc[i] * ds + hd[i];
+            }
+            rhs[0] += hSrc;
+            if (anyImmobile) {
+                for (int i = 0; i < n; i++) {
+                    if (!immobile[i]) {
+                        continue;
+                    }
                     double ha = h * alpha[i];
+                    double ci = cNew[i];
                     double cj = cimNew[i];
                     double sj = sorbed(i, cj);
                     double dsj = slope(i, cj, abs);
-                    double qres = thetaIm[i] * (a0 + h * muW[i]) * cj + rhoIm[i] * (a0 + h * muS[i]) * sj
-                            + ha * (cj - ci) - histIm[i];
-                    double jim = thetaIm[i] * (a0 + h * muW[i]) + rhoIm[i] * (a0 + h * muS[i]) * dsj + ha;
-                    r += ha * (ci - cj);
-                    diag += ha - ha * ha / jim;
-                    rhs[i] = -r - ha * qres / jim;
+                    double qres = wci[i] * cj + sci[i] * sj + ha * (cj - ci) - histIm[i];
+                    double jim = wci[i] + sci[i] * dsj + ha;
+                    double invJ = 1 / jim;
+                    rhs[i] -= ha * (ci - cj) + ha * qres * invJ;
+                    diagonal[i] += ha - ha * ha * invJ;
                     resIm[i] = qres;
-                    imInv[i] = 1 / jim;
-                    imGain[i] = ha / jim;
-                } else {
-                    rhs[i] = -r;
+                    imInv[i] = invJ;
                 }
-                lower[i] = h * lo[i];
-                upper[i] = h * up[i];
-                factorInv[i] = diag;
             }
-            // Thomas algorithm on (lower, factorInv = diagonal, upper), result in rhs
+            // Thomas algorithm on (lower, diagonal, upper); the update lands in rhs
             double prevUp = 0;
             double y = 0;
             for (int i = 0; i < n; i++) {
-                double inv = 1 / (factorInv[i] - lower[i] * prevUp);
+                double inv = 1 / (diagonal[i] - lower[i] * prevUp);
                 y = (rhs[i] - lower[i] * y) * inv;
                 rhs[i] = y;
                 prevUp = upper[i] * inv;
@@ -871,27 +985,33 @@ public final class NumericalFlushingSolver {
             for (int i = n - 2; i >= 0; i--) {
                 rhs[i] -= factorUp[i] * rhs[i + 1];
             }
-            boolean converged = true;
+            // scaled size of the update: 1 = the tolerance
+            double size = 0;
             for (int i = 0; i < n; i++) {
                 double d = rhs[i];
                 double next = cNew[i] + d;
-                if (Math.abs(d) > relTol * Math.abs(next) + abs) {
-                    converged = false;
-                }
+                size = Math.max(size, Math.abs(d) / (relTol * Math.abs(next) + abs));
                 cNew[i] = next;
-                if (immobile[i]) {
-                    double dj = (-resIm[i] + h * alpha[i] * d) * imInv[i];
-                    double nextJ = cimNew[i] + dj;
-                    if (Math.abs(dj) > relTol * Math.abs(nextJ) + abs) {
-                        converged = false;
+            }
+            if (anyImmobile) {
+                for (int i = 0; i < n; i++) {
+                    if (immobile[i]) {
+                        double dj = (-resIm[i] + h * alpha[i] * rhs[i]) * imInv[i];
+                        double nextJ = cimNew[i] + dj;
+                        size = Math.max(size, Math.abs(dj) / (relTol * Math.abs(nextJ) + abs));
+                        cimNew[i] = nextJ;
                     }
-                    cimNew[i] = nextJ;
                 }
             }
-            if (!Double.isFinite(cNew[0]) || !Double.isFinite(cNew[n - 1])) {
+            if (!(size < Double.POSITIVE_INFINITY)) {
                 lastNewtonIterations = it;
                 return false;
             }
+            // converged when the update is within the tolerance, or when the contraction rate
+            // theta says the error left after it is: theta / (1 - theta) * size <= 1
+            double theta = size / previousSize;
+            boolean converged = size <= 1 || (it > 1 && theta < 0.5 && theta / (1 - theta) * size <= 1);
+            previousSize = size;
             if (converged) {
                 lastNewtonIterations = it;
                 return true;
