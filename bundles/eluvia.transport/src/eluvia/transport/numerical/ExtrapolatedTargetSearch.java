@@ -12,9 +12,10 @@ import eluvia.transport.TransportInputException;
  * are refined together, and (4 T(h/2) - T(h)) / 3 removes the leading term. The difference of
  * the two runs divided by 3 estimates the error of the fine run. The extrapolation needs the
  * asymptotic range: the coarse run should already be within a few tenths of a percent (cell
- * Peclet number at most 2 everywhere, no upwind faces). In the tests and benchmarks (layer Peclet
- * number 10, 20 and 40 cells, steps of 0.01 and 0.005 pore volumes) it lowered the error from
- * 2e-4 to below 1e-5 for about five times the cost of the coarse run.
+ * Peclet number at most 2 everywhere, no upwind faces). Measured against the exact finite-layer
+ * series (layer Peclet numbers 1 to 100, coarse steps of 0.01 pore volumes, 20 to 200 cells,
+ * targets 0.01 and 1e-4): coarse errors of 3e-4 to 4e-3 (relative) became 1e-8 to 4e-5, for
+ * about five times the cost of the coarse run.
  */
 public final class ExtrapolatedTargetSearch {
     private ExtrapolatedTargetSearch() {
