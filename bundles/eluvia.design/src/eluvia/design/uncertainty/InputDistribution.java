@@ -120,8 +120,8 @@ public sealed interface InputDistribution
      * ln(geometric standard deviation). It is stored as median and geometric standard deviation;
      * {@link #fromMeanAndStandardDeviation(double, double)} converts an arithmetic mean m and
      * standard deviation s exactly: sigma^2 = ln(1 + s^2/m^2), median = m / sqrt(1 + s^2/m^2),
-     * geometric standard deviation = exp(sigma) (the moments of the lognormal distribution, e.g.
-     * Aitchison and Brown 1957, The Lognormal Distribution).
+     * geometric standard deviation = exp(sigma) (from the moments of the lognormal distribution,
+     * E[X] = median exp(sigma^2 / 2) and Var[X] = E[X]^2 (exp(sigma^2) - 1), a common result).
      */
     record LogNormal(double median, double geometricStandardDeviation) implements InputDistribution {
         /**

@@ -29,7 +29,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  * Latin hypercube strata, independence and reproducibility.
  */
 final class SampleGeneratorTest {
-    private static final int RUNS = 20_000;
+    private static final int RUNS = 10_000;
     /** Four standard errors: a correct sampler fails with probability below 1e-4 per check. */
     private static final double STANDARD_ERRORS = 4;
 
