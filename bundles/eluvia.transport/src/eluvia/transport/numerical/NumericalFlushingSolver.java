@@ -123,6 +123,9 @@ public final class NumericalFlushingSolver {
     private final double[] sci;
     private final double[] hd;
     private final double[] diagonal;
+    /** Isotherm value and slope at Newton's last iterate (before its last update, held in rhs). */
+    private final double[] iterSorbed;
+    private final double[] iterSlope;
     private double cachedStep = Double.NaN;
     private double cachedA0 = Double.NaN;
     private int lastNewtonIterations;
@@ -307,6 +310,8 @@ public final class NumericalFlushingSolver {
         sci = new double[n];
         hd = new double[n];
         diagonal = new double[n];
+        iterSorbed = new double[n];
+        iterSlope = new double[n];
     }
 
     private static int[] cellCounts(List<SoilLayer> layers, SolverSettings settings, double q) {
@@ -619,7 +624,10 @@ public final class NumericalFlushingSolver {
                     mi = thetaM[i] * ci + rhoM[i] * s;
                     di = muW[i] * thetaM[i] * ci + muS[i] * rhoM[i] * s;
                 } else {
-                    double s = sorbed(i, ci);
+                    // Newton's last update d was tiny: S(c + d) = S(c) + S'(c) d to within
+                    // S'' d^2 / 2, below round-off, which saves evaluating the isotherm again
+                    double d = rhs[i];
+                    double s = Math.abs(d) <= 1e-7 * Math.abs(ci) ? iterSorbed[i] + iterSlope[i] * d : sorbed(i, ci);
                     mi = thetaM[i] * ci + rhoM[i] * s;
                     di = muW[i] * thetaM[i] * ci + muS[i] * rhoM[i] * s;
                 }
@@ -951,6 +959,8 @@ public final class NumericalFlushingSolver {
                 }
                 rhs[i] = histM[i] - wc[i] * ci - sc[i] * s - transport;
                 diagonal[i] = wc[i] + sc[i] * ds + hd[i];
+                iterSorbed[i] = s;
+                iterSlope[i] = ds;
             }
             rhs[0] += hSrc;
             if (anyImmobile) {
