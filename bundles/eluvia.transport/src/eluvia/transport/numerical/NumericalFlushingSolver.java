@@ -26,10 +26,12 @@ import eluvia.transport.TransportInputException;
  * of a two-region layer is eliminated cell by cell before the solve (static condensation), so it
  * costs no extra system. With linear sorption a step is a single solve, and the factorisation is
  * reused while the step length does not change. With nonlinear sorption each step iterates
- * Newton's method with the exact Jacobian until every update is below the relative tolerance of
- * the settings (default 1e-9) times |C| plus 1e-12 times the reference concentration; the slope
- * of a Freundlich isotherm is taken at that absolute floor where C is smaller, which keeps the
- * Jacobian finite at C = 0.
+ * Newton's method with the exact Jacobian, from the linear extrapolation of the last two states,
+ * until the error left (the update itself, or the update times theta / (1 - theta) with theta the
+ * observed contraction rate) is below the relative tolerance of the settings (default 1e-9) times
+ * |C| plus 1e-12 times the reference concentration, in every cell; the slope of a Freundlich
+ * isotherm is taken at that absolute floor where C is smaller, which keeps the Jacobian finite at
+ * C = 0. Typically two iterations a step.
  *
  * <p><b>Units.</b> Concentrations in mg/L (water) and mg/kg (soil), depths in m, times in days,
  * masses in mg per m<sup>2</sup> of plan area.
