@@ -50,7 +50,7 @@ public final class Dispersivities {
             return layer.getDispersivityMetres();
         }
         double scale = scaleMetres(layer);
-        if (!(Double.isFinite(scale) && scale > 0)) {
+        if (!(Double.isFinite(scale) && scale > 0) || (rule == DispersivityRule.XU_ECKSTEIN_1995 && scale <= 1)) {
             return Double.NaN;
         }
         return rule == DispersivityRule.TENTH_OF_SCALE ? tenthOfScaleMetres(scale) : xuEckstein1995Metres(scale);

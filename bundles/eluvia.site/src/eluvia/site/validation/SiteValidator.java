@@ -12,7 +12,23 @@ import org.eclipse.emf.ecore.util.EcoreUtil;
 
 import eluvia.site.files.ProjectFiles;
 import eluvia.site.library.CasNumbers;
+import eluvia.site.derived.Dispersivities;
+import eluvia.site.derived.ZoneGeometry;
 import eluvia.site.model.CleanupLevel;
+import eluvia.site.model.ColumnTest;
+import eluvia.site.model.ColumnTestPoint;
+import eluvia.site.model.DispersivityRule;
+import eluvia.site.model.ExcavationDesign;
+import eluvia.site.model.ExcavationSoilType;
+import eluvia.site.model.NonequilibriumEntry;
+import eluvia.site.model.PriceBook;
+import eluvia.site.model.PriceItem;
+import eluvia.site.model.Revision;
+import eluvia.site.model.Sample;
+import eluvia.site.model.SamplingLocation;
+import eluvia.site.model.SolutionMethod;
+import eluvia.site.model.SorptionIsotherm;
+import eluvia.site.model.Vertex;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.FlushingDesign;
 import eluvia.site.model.Project;
@@ -91,6 +107,18 @@ public final class SiteValidator {
         for (int i = 0; i < project.getFlushingDesigns().size(); i++) {
             flushingDesign(project, project.getFlushingDesigns().get(i), i);
         }
+        for (int i = 0; i < project.getExcavationDesigns().size(); i++) {
+            excavationDesign(project, project.getExcavationDesigns().get(i), i);
+        }
+        for (int i = 0; i < project.getPriceBooks().size(); i++) {
+            priceBook(project.getPriceBooks().get(i), i);
+        }
+        for (int i = 0; i < project.getColumnTests().size(); i++) {
+            columnTest(project, project.getColumnTests().get(i), i);
+        }
+        for (int i = 0; i < project.getRevisions().size(); i++) {
+            revision(project.getRevisions().get(i), i);
+        }
     }
 
     private void site(Site site) {
@@ -113,6 +141,109 @@ public final class SiteValidator {
         }
         if (site.getZones().isEmpty()) {
             warning(site, label, "zones", "(none)", "at least one treatment zone", "add the zone to be treated");
+        }
+        if (!finite(site.getGroundSurfaceElevationMetres())) {
+            error(site, label, "groundSurfaceElevationMetres", num(site.getGroundSurfaceElevationMetres()), "a finite elevation in m",
+                    "enter the ground surface elevation above the site datum in metres");
+        }
+        boolean usesCoordinates = !site.getBoundary().isEmpty() || !site.getSamplingLocations().isEmpty()
+                || site.getZones().stream().anyMatch(z -> !z.getFootprint().isEmpty());
+        if (usesCoordinates && (site.getCoordinateFrame() == null || site.getCoordinateFrame().isBlank())) {
+            warning(site, label, "coordinateFrame", "(empty)", "not empty when coordinates are used",
+                    "say what the eastings and northings refer to (origin, orientation, datum)");
+        }
+        polygon(site, label, "boundary", site.getBoundary());
+        Set<String> locationNames = new HashSet<>();
+        for (int i = 0; i < site.getSamplingLocations().size(); i++) {
+            SamplingLocation location = site.getSamplingLocations().get(i);
+            samplingLocation(site, location, i);
+            String key = key(location.getName());
+            if (!key.isEmpty() && !locationNames.add(key)) {
+                warning(location, label("Sampling location", location.getName(), i), "name", quote(location.getName()),
+                        "a name no other location has", "rename one of the locations");
+            }
+        }
+    }
+
+    /** A polygon is either absent or has at least 3 finite vertices enclosing a positive area. */
+    private boolean polygon(EObject owner, String label, String field, List<Vertex> vertices) {
+        if (vertices.isEmpty()) {
+            return false;
+        }
+        if (vertices.size() < 3) {
+            error(owner, label, field, vertices.size() + " vertices", "none, or at least 3 vertices",
+                    "add vertices to close the polygon, or remove them all");
+            return false;
+        }
+        for (int i = 0; i < vertices.size(); i++) {
+            Vertex v = vertices.get(i);
+            if (!finite(v.getEastingMetres()) || !finite(v.getNorthingMetres())) {
+                error(v, label + " vertex " + (i + 1), !finite(v.getEastingMetres()) ? "eastingMetres" : "northingMetres",
+                        num(!finite(v.getEastingMetres()) ? v.getEastingMetres() : v.getNorthingMetres()),
+                        "a finite coordinate in m", "enter the local easting and northing in metres");
+                return false;
+            }
+        }
+        if (ZoneGeometry.polygonAreaSquareMetres(vertices) <= 0) {
+            error(owner, label, field, "area 0 m2", "a polygon enclosing a positive area",
+                    "the vertices lie on one line; correct them");
+            return false;
+        }
+        return true;
+    }
+
+    private void samplingLocation(Site site, SamplingLocation location, int index) {
+        String label = label("Sampling location", location.getName(), index);
+        requireName(location, label, location.getName(), Severity.WARNING, "name the location, e.g. 'B-12'");
+        boolean coordinatesOk = true;
+        for (String field : List.of("eastingMetres", "northingMetres", "groundElevationMetres")) {
+            double value = (Double) location.eGet(location.eClass().getEStructuralFeature(field));
+            if (!finite(value)) {
+                error(location, label, field, num(value), "a finite number in m", "enter the value in metres");
+                coordinatesOk = false;
+            }
+        }
+        if (coordinatesOk && site.getBoundary().size() >= 3
+                && !ZoneGeometry.contains(site.getBoundary(), location.getEastingMetres(), location.getNorthingMetres())) {
+            warning(location, label, "eastingMetres", num(location.getEastingMetres()) + ", " + num(location.getNorthingMetres()),
+                    "inside the site boundary", "check the coordinates, or extend the site boundary");
+        }
+        Project project = site.eContainer() instanceof Project p ? p : null;
+        for (int i = 0; i < location.getSamples().size(); i++) {
+            Sample sample = location.getSamples().get(i);
+            String sampleLabel = "Sample " + (i + 1) + " at " + label;
+            double top = sample.getTopDepthMetres();
+            double bottom = sample.getBottomDepthMetres();
+            if (!(finite(top) && top >= 0)) {
+                error(sample, sampleLabel, "topDepthMetres", num(top), "0 or more m", "enter the depth below ground in metres");
+            } else if (!(finite(bottom) && bottom >= top)) {
+                error(sample, sampleLabel, "bottomDepthMetres", num(bottom), "at least the top depth " + num(top) + " m",
+                        "enter the bottom of the sampled interval in metres");
+            } else if (!site.getLayers().isEmpty()
+                    && bottom > site.getLayers().get(site.getLayers().size() - 1).getBottomDepthMetres() + DEPTH_TOLERANCE_METRES) {
+                warning(sample, sampleLabel, "bottomDepthMetres", num(bottom), "within the soil profile (to "
+                        + num(site.getLayers().get(site.getLayers().size() - 1).getBottomDepthMetres()) + " m)",
+                        "extend the soil layers or check the depth");
+            }
+            Contaminant c = sample.getContaminant();
+            if (c == null) {
+                error(sample, sampleLabel, "contaminant", "(none)", "a contaminant of this project", "choose the contaminant analysed");
+            } else if (project != null && !EcoreUtil.isAncestor(project, c)) {
+                error(sample, sampleLabel, "contaminant", quote(c.getName()), "a contaminant of this project", "choose one from this project");
+            }
+            double concentration = sample.getConcentrationMilligramsPerKg();
+            if (!(finite(concentration) && concentration >= 0)) {
+                error(sample, sampleLabel, "concentrationMilligramsPerKg", num(concentration), "0 or more mg/kg",
+                        "enter the measured concentration in mg/kg of dry soil");
+            }
+            double limit = sample.getDetectionLimitMilligramsPerKg();
+            if (!(finite(limit) && limit >= 0)) {
+                error(sample, sampleLabel, "detectionLimitMilligramsPerKg", num(limit), "0 or more mg/kg",
+                        "enter the laboratory reporting limit in mg/kg");
+            } else if (sample.isNonDetect() && limit <= 0) {
+                error(sample, sampleLabel, "detectionLimitMilligramsPerKg", num(limit), "greater than 0 mg/kg for a non-detect",
+                        "enter the laboratory reporting limit of the non-detect");
+            }
         }
     }
 
@@ -186,8 +317,22 @@ public final class SiteValidator {
             warning(layer, label, "saturatedConductivityMetresPerDay", num(conductivity),
                     "up to about 10000 m/d (clean gravel, common practice)", "check the unit (1 cm/s = 864 m/d)");
         }
+        swellAndShrinkage(layer, label);
+        boolean entered = layer.getDispersivityRule() == DispersivityRule.ENTERED;
+        double scale = layer.getDispersivityScaleMetres();
+        if (!(finite(scale) && scale >= 0)) {
+            error(layer, label, "dispersivityScaleMetres", num(scale), "0 (the layer thickness) or more m",
+                    "enter the flow length for the dispersivity rule in metres, or 0 for the layer thickness");
+        } else if (layer.getDispersivityRule() == DispersivityRule.XU_ECKSTEIN_1995 && depthsOk && finite(bottom)
+                && !(Dispersivities.scaleMetres(layer) > 1)) {
+            error(layer, label, "dispersivityScaleMetres", num(scale), "a flow length above 1 m for Xu and Eckstein (1995)"
+                    + (scale == 0 ? " (0 uses the thickness " + num(bottom - top) + " m)" : ""),
+                    "choose the rule alpha_L = 0.1 L, enter the dispersivity, or give a flow length above 1 m");
+        }
         double dispersivity = layer.getDispersivityMetres();
-        if (!(finite(dispersivity) && dispersivity > 0)) {
+        if (!entered) {
+            // the entered value is not used; nothing to check
+        } else if (!(finite(dispersivity) && dispersivity > 0)) {
             error(layer, label, "dispersivityMetres", num(dispersivity), "greater than 0 m",
                     "enter the longitudinal dispersivity in metres, e.g. 0.1 x the layer thickness (common practice)");
         } else if (depthsOk && finite(bottom) && bottom > top && dispersivity > bottom - top) {
@@ -196,6 +341,21 @@ public final class SiteValidator {
         }
         if (layer.getTextureClass() == null || layer.getTextureClass().isBlank()) {
             warning(layer, label, "textureClass", "(empty)", "not empty", "enter the texture class, e.g. 'sandy loam'");
+        }
+    }
+
+    private void swellAndShrinkage(SoilLayer layer, String label) {
+        double swell = layer.getSwellFactor();
+        if (!(finite(swell) && swell >= 0 && swell <= 1)) {
+            error(layer, label, "swellFactor", num(swell), "[0, 1]", "enter the swell as a fraction: loose = bank x (1 + swell), e.g. 0.25");
+        } else if (swell > 0.6) {
+            warning(layer, label, "swellFactor", num(swell), "up to about 0.6 for soils (clay 30-60 %; rock 50-80 %, Peurifoy Table 4-1)",
+                    "check the value; a swell above 0.6 is rock rather than soil");
+        }
+        double shrinkage = layer.getShrinkageFactor();
+        if (!(finite(shrinkage) && shrinkage >= 0 && shrinkage < 0.5)) {
+            error(layer, label, "shrinkageFactor", num(shrinkage), "[0, 0.5)",
+                    "enter the shrinkage as a fraction: compacted = bank x (1 - shrinkage), e.g. 0.10");
         }
     }
 
@@ -239,6 +399,72 @@ public final class SiteValidator {
             if (!(finite(halfLife) && halfLife >= 0)) {
                 error(c, label, "halfLifeDays", num(halfLife), "0 (no decay) or more days", "enter the decay half-life in days, or 0");
             }
+            isotherm(c, label);
+            nonequilibrium(c, label);
+            double solubility = c.getWaterSolubilityMilligramsPerLitre();
+            if (!(finite(solubility) && solubility >= 0)) {
+                error(c, label, "waterSolubilityMilligramsPerLitre", num(solubility), "0 (not given) or more mg/L",
+                        "enter the solubility in water in mg/L, or 0");
+            }
+            if (c.getPropertySource() == null || c.getPropertySource().isBlank()) {
+                warning(c, label, "propertySource", "(empty)", "not empty", "state where Koc and the other values come from");
+            }
+        }
+    }
+
+    private void isotherm(Contaminant c, String label) {
+        if (c.getIsotherm() == SorptionIsotherm.FREUNDLICH) {
+            positive(c, label, "freundlichKfMgPerKgPerMgPerLitreToN", c.getFreundlichKfMgPerKgPerMgPerLitreToN(),
+                    "(mg/kg)/(mg/L)^n", "enter Kf of S = Kf C^n with S in mg/kg and C in mg/L");
+            double n = c.getFreundlichExponent();
+            if (!(finite(n) && n > 0)) {
+                error(c, label, "freundlichExponent", num(n), "greater than 0", "enter the Freundlich exponent n, e.g. 0.9");
+            } else if (n < 0.3 || n > 1.5) {
+                warning(c, label, "freundlichExponent", num(n), "usually 0.3 to 1.5 (common practice)", "check the exponent");
+            }
+        } else if (c.getIsotherm() == SorptionIsotherm.LANGMUIR) {
+            positive(c, label, "langmuirMaximumMilligramsPerKg", c.getLangmuirMaximumMilligramsPerKg(), "mg/kg",
+                    "enter the sorption maximum Smax in mg/kg");
+            positive(c, label, "langmuirConstantLitresPerMilligram", c.getLangmuirConstantLitresPerMilligram(), "L/mg",
+                    "enter the Langmuir constant K in L/mg");
+        }
+    }
+
+    private void nonequilibrium(Contaminant c, String label) {
+        NonequilibriumEntry entry = c.getNonequilibrium();
+        if (entry == NonequilibriumEntry.DIMENSIONLESS) {
+            fraction(c, label, "beta", c.getBeta(), false, "enter beta in (0, 1]; 1 is equilibrium");
+            double omega = c.getOmega();
+            if (!(finite(omega) && omega >= 0)) {
+                error(c, label, "omega", num(omega), "0 or more", "enter the dimensionless mass-transfer coefficient omega");
+            }
+        } else if (entry == NonequilibriumEntry.PHYSICAL || entry == NonequilibriumEntry.CHEMICAL) {
+            if (entry == NonequilibriumEntry.PHYSICAL) {
+                fraction(c, label, "mobileWaterFraction", c.getMobileWaterFraction(), false,
+                        "enter the mobile share of the water content, theta_m / theta, in (0, 1]");
+            }
+            double f = c.getMobileSiteFraction();
+            if (!(finite(f) && f >= 0 && f <= 1)) {
+                error(c, label, "mobileSiteFraction", num(f), "[0, 1]", entry == NonequilibriumEntry.PHYSICAL
+                        ? "enter the fraction f of sorption sites in contact with mobile water"
+                        : "enter the fraction F of instantaneous sorption sites");
+            }
+            double rate = c.getMassTransferRatePerDay();
+            if (!(finite(rate) && rate >= 0)) {
+                error(c, label, "massTransferRatePerDay", num(rate), "0 or more 1/d", "enter the first-order rate in 1/d");
+            }
+        }
+    }
+
+    private void positive(EObject object, String label, String field, double value, String unit, String fix) {
+        if (!(finite(value) && value > 0)) {
+            error(object, label, field, num(value), "greater than 0 " + unit, fix);
+        }
+    }
+
+    private void fraction(EObject object, String label, String field, double value, boolean zeroAllowed, String fix) {
+        if (!(finite(value) && (zeroAllowed ? value >= 0 : value > 0) && value <= 1)) {
+            error(object, label, field, num(value), zeroAllowed ? "[0, 1]" : "(0, 1]", fix);
         }
     }
 
@@ -256,9 +482,18 @@ public final class SiteValidator {
                 error(level, label, "contaminant", quote(c.getName()), "one cleanup level per contaminant", "remove the duplicate level");
             }
             double soil = level.getSoilLevelMilligramsPerKg();
-            if (!(finite(soil) && soil > 0)) {
+            if (!level.isSoilLevelEntered() && !level.isPorewaterLevelEntered()) {
+                error(level, label, "soilLevelEntered", "false", "a soil level, a pore-water level or both",
+                        "tick the level(s) that apply and enter them");
+            }
+            if (level.isSoilLevelEntered() && !(finite(soil) && soil > 0)) {
                 error(level, label, "soilLevelMilligramsPerKg", num(soil), "greater than 0 mg/kg",
                         "enter the cleanup level in mg/kg of dry soil");
+            }
+            double water = level.getPorewaterLevelMilligramsPerLitre();
+            if (level.isPorewaterLevelEntered() && !(finite(water) && water > 0)) {
+                error(level, label, "porewaterLevelMilligramsPerLitre", num(water), "greater than 0 mg/L",
+                        "enter the pore-water cleanup level in mg/L");
             }
             if (level.getBasis() == null || level.getBasis().isBlank()) {
                 warning(level, label, "basis", "(empty)", "not empty", "state where the level comes from (rule, permit, risk assessment)");
@@ -276,8 +511,24 @@ public final class SiteValidator {
         String label = label("Zone", zone.getName(), index);
         requireName(zone, label, zone.getName(), Severity.WARNING, "name the zone");
         double area = zone.getAreaSquareMetres();
-        if (!(finite(area) && area > 0)) {
-            error(zone, label, "areaSquareMetres", num(area), "greater than 0 m2", "enter the plan area of the zone in m2");
+        boolean footprintOk = polygon(zone, label, "footprint", zone.getFootprint());
+        if (zone.getFootprint().isEmpty() && !(finite(area) && area > 0)) {
+            error(zone, label, "areaSquareMetres", num(area), "greater than 0 m2", "enter the plan area of the zone in m2, or draw its footprint");
+        } else if (footprintOk) {
+            double polygonArea = ZoneGeometry.polygonAreaSquareMetres(zone.getFootprint());
+            if (area != 0 && Math.abs(area - polygonArea) > 0.01 * polygonArea) {
+                warning(zone, label, "areaSquareMetres", num(area), "0 or the footprint's area " + round(polygonArea, 1) + " m2",
+                        "the footprint polygon gives the area; the entered area is not used");
+            }
+            if (site.getBoundary().size() >= 3) {
+                for (Vertex v : zone.getFootprint()) {
+                    if (!ZoneGeometry.contains(site.getBoundary(), v.getEastingMetres(), v.getNorthingMetres())) {
+                        error(zone, label, "footprint", "vertex (" + num(v.getEastingMetres()) + ", " + num(v.getNorthingMetres()) + ")",
+                                "inside the site boundary", "move the zone's vertices inside the site, or extend the site boundary");
+                        break;
+                    }
+                }
+            }
         }
         double top = zone.getTopDepthMetres();
         double bottom = zone.getBottomDepthMetres();
@@ -323,12 +574,42 @@ public final class SiteValidator {
                         "enter the representative initial soil concentration in mg/kg");
                 continue;
             }
+            napl(site, zone, source, sourceLabel, c, concentration);
             CleanupLevel level = levelOf(project, c);
             if (level != null && finite(level.getSoilLevelMilligramsPerKg()) && level.getSoilLevelMilligramsPerKg() > 0
                     && concentration <= level.getSoilLevelMilligramsPerKg()) {
                 warning(source, sourceLabel, "soilConcentrationMilligramsPerKg", num(concentration),
                         "above the cleanup level " + num(level.getSoilLevelMilligramsPerKg()) + " mg/kg",
                         "the zone is already below the cleanup level for this contaminant; nothing to treat for it");
+            }
+        }
+    }
+
+    /**
+     * Pore-water concentration of a total soil concentration at linear equilibrium,
+     * C_w = C_T / (Kd + theta / rho_b) (rho_b in kg/L), compared with the solubility: above it a
+     * non-aqueous phase is probably present.
+     */
+    private void napl(Site site, TreatmentZone zone, SourceConcentration source, String sourceLabel, Contaminant c,
+            double concentration) {
+        if (c == null || !(c.getWaterSolubilityMilligramsPerLitre() > 0) || c.getIsotherm() != SorptionIsotherm.LINEAR) {
+            return;
+        }
+        for (SoilLayer layer : site.getLayers()) {
+            boolean overlaps = layer.getBottomDepthMetres() > zone.getTopDepthMetres() && layer.getTopDepthMetres() < zone.getBottomDepthMetres();
+            double rhoKgPerLitre = layer.getBulkDensityKgPerCubicMetre() / 1000.0;
+            double kd = c.isKdEntered() ? c.getKdLitresPerKg() : c.getKocLitresPerKg() * layer.getOrganicCarbonFraction();
+            double denominator = kd + layer.getWaterContent() / rhoKgPerLitre;
+            if (overlaps && rhoKgPerLitre > 0 && denominator > 0) {
+                double porewater = concentration / denominator;
+                if (porewater > c.getWaterSolubilityMilligramsPerLitre()) {
+                    warning(source, sourceLabel, "soilConcentrationMilligramsPerKg", num(concentration),
+                            "below " + round(c.getWaterSolubilityMilligramsPerLitre() * denominator, 1) + " mg/kg in layer "
+                                    + quote(layer.getName()) + ", where pore water would reach the solubility "
+                                    + num(c.getWaterSolubilityMilligramsPerLitre()) + " mg/L",
+                            "a non-aqueous phase (NAPL) is probably present; the flushing estimates assume dissolved and sorbed contaminant only");
+                    return;
+                }
             }
         }
     }
@@ -368,6 +649,181 @@ public final class SiteValidator {
         if (!(finite(maxPv) && maxPv >= 1 && maxPv <= 1e6)) {
             error(design, label, "maxPoreVolumes", num(maxPv), "[1, 1000000]",
                     "enter the most pore volumes to search, e.g. 1000");
+        }
+        if (design.getSolutionMethod() == SolutionMethod.TWO_REGION && zone != null
+                && zone.getSourceConcentrations().stream().map(SourceConcentration::getContaminant)
+                        .allMatch(c -> c == null || c.getNonequilibrium() == NonequilibriumEntry.EQUILIBRIUM)) {
+            warning(design, label, "solutionMethod", "TWO_REGION", "a contaminant with nonequilibrium parameters",
+                    "enter beta and omega (or the physical or chemical parameters) for the zone's contaminants, or choose EQUILIBRIUM");
+        }
+        int cells = design.getNumericalCellCount();
+        if (cells < 10 || cells > 100_000) {
+            error(design, label, "numericalCellCount", Integer.toString(cells), "[10, 100000]",
+                    "enter the number of cells of the numerical solution, e.g. 200");
+        }
+        double tolerance = design.getNumericalRelativeTolerance();
+        if (!(finite(tolerance) && tolerance > 0 && tolerance <= 0.01)) {
+            error(design, label, "numericalRelativeTolerance", num(tolerance), "(0, 0.01]", "enter a relative accuracy, e.g. 1e-6");
+        }
+        positive(design, label, "monitoringIntervalDays", design.getMonitoringIntervalDays(), "d",
+                "enter the days between effluent samplings, e.g. 7");
+        double dose = design.getAmendmentDoseKilogramsPerCubicMetre();
+        if (!(finite(dose) && dose >= 0)) {
+            error(design, label, "amendmentDoseKilogramsPerCubicMetre", num(dose), "0 (plain water) or more kg/m3",
+                    "enter the amendment dose in kg per m3 of flushing solution");
+        } else if (dose > 0 && (design.getAmendmentName() == null || design.getAmendmentName().isBlank())) {
+            warning(design, label, "amendmentName", "(empty)", "the amendment's name when a dose is given", "name the amendment");
+        }
+        priceBookOf(project, design, label, design.getPriceBook());
+    }
+
+    private void priceBookOf(Project project, EObject design, String label, PriceBook book) {
+        if (book == null) {
+            warning(design, label, "priceBook", "(none)", "a price book of this project", "choose the price book to cost this alternative");
+        } else if (!EcoreUtil.isAncestor(project, book)) {
+            error(design, label, "priceBook", quote(book.getName()), "a price book of this project", "choose one from this project");
+        }
+    }
+
+    private void excavationDesign(Project project, ExcavationDesign design, int index) {
+        String label = label("Excavation design", design.getName(), index);
+        requireName(design, label, design.getName(), Severity.WARNING, "name the alternative");
+        TreatmentZone zone = design.getZone();
+        if (zone == null) {
+            error(design, label, "zone", "(none)", "a treatment zone of this project", "choose the zone to dig out");
+        } else if (!EcoreUtil.isAncestor(project, zone)) {
+            error(design, label, "zone", quote(zone.getName()), "a treatment zone of this project", "choose one from this project");
+        }
+        double slope = design.getSideSlopeHorizontalPerVertical();
+        double steepest = steepestSlope(design.getSoilType());
+        if (!(finite(slope) && slope >= 0 && slope <= 10)) {
+            error(design, label, "sideSlopeHorizontalPerVertical", num(slope), "[0, 10] (horizontal per vertical)",
+                    "enter the side slope as H:V, e.g. 1.5 for 1.5 H : 1 V");
+        } else if (slope < steepest) {
+            warning(design, label, "sideSlopeHorizontalPerVertical", num(slope), "at least " + num(steepest) + " H : 1 V for "
+                    + design.getSoilType() + " (US OSHA 29 CFR 1926 Subpart P App. B Table B-1, excavations under 20 ft)",
+                    "flatten the slope or plan a protective system; follow the rules where the site is");
+        }
+        double overdig = design.getOverdigMetres();
+        if (!(finite(overdig) && overdig >= 0)) {
+            error(design, label, "overdigMetres", num(overdig), "0 or more m", "enter the extra depth dug beyond the zone in metres");
+        }
+        positive(design, label, "truckHeapedCapacityCubicMetres", design.getTruckHeapedCapacityCubicMetres(), "m3",
+                "enter the heaped capacity of one truck in m3, e.g. 15");
+        positive(design, label, "truckPayloadKilograms", design.getTruckPayloadKilograms(), "kg",
+                "enter the legal payload of one truck in kg, e.g. 20000");
+        priceBookOf(project, design, label, design.getPriceBook());
+    }
+
+    /** Maximum allowable slopes, H per V (US OSHA 29 CFR 1926 Subpart P App. B Table B-1 [PUB]). */
+    static double steepestSlope(ExcavationSoilType type) {
+        return switch (type) {
+            case STABLE_ROCK -> 0.0;
+            case TYPE_A -> 0.75;
+            case TYPE_B -> 1.0;
+            case TYPE_C -> 1.5;
+        };
+    }
+
+    private void priceBook(PriceBook book, int index) {
+        String label = label("Price book", book.getName(), index);
+        requireName(book, label, book.getName(), Severity.WARNING, "name the price book");
+        boolean bookCurrency = book.getCurrency() != null && !book.getCurrency().isBlank();
+        if (bookCurrency && !book.getCurrency().trim().matches("[A-Z]{3}")) {
+            warning(book, label, "currency", quote(book.getCurrency()), "a three-letter ISO 4217 code, e.g. USD or EUR", "enter the currency code");
+        }
+        if (book.getReference() == null || book.getReference().isBlank()) {
+            warning(book, label, "reference", "(empty)", "not empty", "state where the rates come from and their price date");
+        }
+        Set<String> codes = new HashSet<>();
+        for (int i = 0; i < book.getItems().size(); i++) {
+            PriceItem item = book.getItems().get(i);
+            String itemLabel = label("Price item", item.getName(), i) + " in " + label;
+            requireName(item, itemLabel, item.getName(), Severity.WARNING, "say what is priced");
+            String code = key(item.getCode());
+            if (code.isEmpty()) {
+                warning(item, itemLabel, "code", "(empty)", "not empty", "give the item a short code, e.g. excavation.bank");
+            } else if (!codes.add(code)) {
+                error(item, itemLabel, "code", quote(item.getCode()), "a code no other item of the book has", "rename the duplicate code");
+            }
+            if (item.getUnit() == null || item.getUnit().isBlank()) {
+                error(item, itemLabel, "unit", "(empty)", "not empty", "enter the unit the rate is per, e.g. m3");
+            }
+            double rate = item.getRatePerUnit();
+            if (!(finite(rate) && rate >= 0)) {
+                error(item, itemLabel, "ratePerUnit", num(rate), "0 or more", "enter the rate per unit");
+            }
+            boolean itemCurrency = item.getCurrency() != null && !item.getCurrency().isBlank();
+            if (!itemCurrency && !bookCurrency) {
+                error(item, itemLabel, "currency", "(empty)", "a currency here or on the price book", "enter the currency, e.g. USD");
+            } else if (itemCurrency && !item.getCurrency().trim().matches("[A-Z]{3}")) {
+                warning(item, itemLabel, "currency", quote(item.getCurrency()), "a three-letter ISO 4217 code", "enter the currency code");
+            }
+            if (item.getSourceNote() == null || item.getSourceNote().isBlank()) {
+                warning(item, itemLabel, "sourceNote", "(empty)", "not empty", "say where this rate comes from");
+            }
+        }
+    }
+
+    private void columnTest(Project project, ColumnTest test, int index) {
+        String label = label("Column test", test.getName(), index);
+        requireName(test, label, test.getName(), Severity.WARNING, "name the test");
+        Contaminant c = test.getContaminant();
+        if (c == null) {
+            error(test, label, "contaminant", "(none)", "a contaminant of this project", "choose the contaminant tested");
+        } else if (!EcoreUtil.isAncestor(project, c)) {
+            error(test, label, "contaminant", quote(c.getName()), "a contaminant of this project", "choose one from this project");
+        }
+        if (test.getLayer() != null && !EcoreUtil.isAncestor(project, test.getLayer())) {
+            error(test, label, "layer", quote(test.getLayer().getName()), "a soil layer of this project or none", "choose one from this project");
+        }
+        positive(test, label, "columnLengthMetres", test.getColumnLengthMetres(), "m", "enter the length of the soil column in metres");
+        positive(test, label, "darcyFluxMetresPerDay", test.getDarcyFluxMetresPerDay(), "m/d", "enter the Darcy flux through the column in m/d");
+        double water = test.getWaterContent();
+        if (!(finite(water) && water > 0 && water < 1)) {
+            error(test, label, "waterContent", num(water), "(0, 1)", "enter the column's volumetric water content as a fraction");
+        }
+        double density = test.getBulkDensityKgPerCubicMetre();
+        if (!(finite(density) && density > 0 && density < PARTICLE_DENSITY_KG_PER_CUBIC_METRE)) {
+            error(test, label, "bulkDensityKgPerCubicMetre", num(density), "(0, 2650) kg/m3", "enter the column's dry bulk density in kg/m3");
+        }
+        positive(test, label, "referenceConcentrationMilligramsPerLitre", test.getReferenceConcentrationMilligramsPerLitre(), "mg/L",
+                "enter C0 in mg/L");
+        if (test.getPoints().size() < 2) {
+            warning(test, label, "points", test.getPoints().size() + " points", "at least 2 points", "enter the measured curve");
+        }
+        double previous = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < test.getPoints().size(); i++) {
+            ColumnTestPoint point = test.getPoints().get(i);
+            String pointLabel = "Point " + (i + 1) + " of " + label;
+            double pv = point.getPoreVolumes();
+            if (!(finite(pv) && pv >= 0)) {
+                error(point, pointLabel, "poreVolumes", num(pv), "0 or more", "enter the pore volumes passed");
+            } else if (pv <= previous) {
+                error(point, pointLabel, "poreVolumes", num(pv), "greater than the previous point's " + num(previous),
+                        "enter the points in increasing pore volumes");
+            }
+            previous = finite(pv) ? Math.max(previous, pv) : previous;
+            double cc0 = point.getRelativeConcentration();
+            if (!(finite(cc0) && cc0 >= 0)) {
+                error(point, pointLabel, "relativeConcentration", num(cc0), "0 or more", "enter C/C0");
+            } else if (cc0 > 1.2) {
+                warning(point, pointLabel, "relativeConcentration", num(cc0), "up to about 1.2 (measurement scatter above 1)",
+                        "check C0 and the measured concentration");
+            }
+        }
+    }
+
+    private void revision(Revision revision, int index) {
+        String label = "Revision " + (index + 1);
+        if (revision.getAuthor() == null || revision.getAuthor().isBlank()) {
+            warning(revision, label, "author", "(empty)", "not empty", "say who made the change");
+        }
+        if (revision.getTimestamp() == null) {
+            warning(revision, label, "timestamp", "(none)", "a date and time", "enter when the change was made");
+        }
+        if (revision.getSummary() == null || revision.getSummary().isBlank()) {
+            warning(revision, label, "summary", "(empty)", "not empty", "say what changed");
         }
     }
 

@@ -46,6 +46,7 @@ final class FuzzedFileTest {
                 try {
                     Project project = ProjectFiles.load(new ByteArrayInputStream(mutated), "fuzz.eluvia");
                     SiteValidator.validate(project);
+                    readDerivedFeatures(project);
                     counts[0]++;
                 } catch (ProjectFileException e) {
                     assertTrue(e.getMessage().startsWith("fuzz.eluvia"), e.getMessage());
@@ -62,6 +63,17 @@ final class FuzzedFileTest {
         assertTrue(refused > CASES / 10 && loaded > CASES / 20, "mutations too weak or too strong: loaded " + loaded
                 + ", refused " + refused);
         assertTrue(System.nanoTime() - start < Duration.ofSeconds(90).toNanos(), "the fuzz run is too slow");
+    }
+
+    /** Derived values (areas, volumes, dispersivities) are computed on demand; they must not throw either. */
+    private static void readDerivedFeatures(Project project) {
+        project.eAllContents().forEachRemaining(object -> {
+            for (org.eclipse.emf.ecore.EStructuralFeature feature : object.eClass().getEAllStructuralFeatures()) {
+                if (feature.isDerived()) {
+                    object.eGet(feature);
+                }
+            }
+        });
     }
 
     private static byte[] mutate(byte[] original, Random random) {

@@ -18,6 +18,15 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 import eluvia.site.model.CleanupLevel;
+import eluvia.site.model.ColumnTest;
+import eluvia.site.model.ExcavationDesign;
+import eluvia.site.model.ExcavationSoilType;
+import eluvia.site.model.NonequilibriumEntry;
+import eluvia.site.model.PriceBook;
+import eluvia.site.model.PriceItem;
+import eluvia.site.model.Sample;
+import eluvia.site.model.SamplingLocation;
+import eluvia.site.model.SorptionIsotherm;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.FlushingDesign;
 import eluvia.site.model.Project;
@@ -54,6 +63,30 @@ final class SiteValidatorTest {
 
     private static CleanupLevel level(Project p, int i) {
         return p.getCleanupLevels().get(i);
+    }
+
+    private static SamplingLocation location(Project p, int i) {
+        return p.getSite().getSamplingLocations().get(i);
+    }
+
+    private static Sample sample(Project p, int i) {
+        return location(p, 0).getSamples().get(i);
+    }
+
+    private static ExcavationDesign dig(Project p) {
+        return p.getExcavationDesigns().get(0);
+    }
+
+    private static PriceBook book(Project p) {
+        return p.getPriceBooks().get(0);
+    }
+
+    private static PriceItem item(Project p, int i) {
+        return book(p).getItems().get(i);
+    }
+
+    private static ColumnTest column(Project p) {
+        return p.getColumnTests().get(0);
     }
 
     private static SourceConcentration source(Project p, int i) {
@@ -133,7 +166,7 @@ final class SiteValidatorTest {
                 warning("basis empty", p -> level(p, 0).setBasis(""), p -> level(p, 0), "basis", "(empty)", "not empty"),
                 // Zones
                 warning("zone name empty", p -> zone(p).setName(""), p -> zone(p), "name", "(empty)", "not empty"),
-                error("zone area negative", p -> zone(p).setAreaSquareMetres(-450), p -> zone(p), "areaSquareMetres", "-450", "greater than 0 m2"),
+                error("zone area negative without footprint", p -> { zone(p).getFootprint().clear(); zone(p).setAreaSquareMetres(-450); }, p -> zone(p), "areaSquareMetres", "-450", "greater than 0 m2"),
                 error("zone top negative", p -> zone(p).setTopDepthMetres(-1), p -> zone(p), "topDepthMetres", "-1", "[0, bottom depth)"),
                 error("zone bottom above top", p -> zone(p).setBottomDepthMetres(0), p -> zone(p), "bottomDepthMetres", "0", "greater than the top depth"),
                 error("zone below the soil profile", p -> zone(p).setBottomDepthMetres(5), p -> zone(p), "bottomDepthMetres", "5",
@@ -159,7 +192,153 @@ final class SiteValidatorTest {
                         "at most the saturated conductivity of layer 'Silty sand', 0.5 m/d"),
                 error("eight days a week", p -> design(p).setOperatingDaysPerWeek(8), p -> design(p), "operatingDaysPerWeek", "8", "(0, 7]"),
                 error("capture above one", p -> design(p).setCaptureEfficiency(95), p -> design(p), "captureEfficiency", "95", "(0, 1]"),
-                error("max pore volumes below one", p -> design(p).setMaxPoreVolumes(0.5), p -> design(p), "maxPoreVolumes", "0.5", "[1, 1000000]"));
+                error("max pore volumes below one", p -> design(p).setMaxPoreVolumes(0.5), p -> design(p), "maxPoreVolumes", "0.5", "[1, 1000000]"),
+                // Schema 2: site frame, boundary and sampling
+                error("ground elevation not a number", p -> p.getSite().setGroundSurfaceElevationMetres(Double.NaN), p -> p.getSite(),
+                        "groundSurfaceElevationMetres", "NaN", "a finite elevation in m"),
+                warning("coordinates without a frame", p -> p.getSite().setCoordinateFrame(""), p -> p.getSite(), "coordinateFrame", "(empty)",
+                        "not empty when coordinates are used"),
+                error("boundary of two vertices", p -> p.getSite().getBoundary().subList(2, 4).clear(), p -> p.getSite(), "boundary",
+                        "2 vertices", "none, or at least 3 vertices"),
+                error("boundary on a line", p -> p.getSite().getBoundary().forEach(v -> v.setNorthingMetres(0)), p -> p.getSite(), "boundary",
+                        "area 0 m2", "a polygon enclosing a positive area"),
+                error("boundary vertex not a number", p -> p.getSite().getBoundary().get(1).setEastingMetres(Double.NaN),
+                        p -> p.getSite().getBoundary().get(1), "eastingMetres", "NaN", "a finite coordinate in m"),
+                warning("location name empty", p -> location(p, 0).setName(""), p -> location(p, 0), "name", "(empty)", "not empty"),
+                warning("duplicate location names", p -> location(p, 1).setName("b-1"), p -> location(p, 1), "name", "'b-1'", "a name no other location has"),
+                error("location easting infinite", p -> location(p, 0).setEastingMetres(Double.POSITIVE_INFINITY), p -> location(p, 0),
+                        "eastingMetres", "Infinity", "a finite number in m"),
+                warning("location outside the boundary", p -> location(p, 0).setEastingMetres(95), p -> location(p, 0), "eastingMetres",
+                        "95, 15", "inside the site boundary"),
+                error("sample top negative", p -> sample(p, 0).setTopDepthMetres(-0.1), p -> sample(p, 0), "topDepthMetres", "-0.1", "0 or more m"),
+                error("sample bottom above top", p -> sample(p, 0).setBottomDepthMetres(0.4), p -> sample(p, 0), "bottomDepthMetres", "0.4",
+                        "at least the top depth 0.5 m"),
+                warning("sample below the profile", p -> { sample(p, 0).setBottomDepthMetres(6); }, p -> sample(p, 0), "bottomDepthMetres", "6",
+                        "within the soil profile (to 4 m)"),
+                error("sample without contaminant", p -> sample(p, 0).setContaminant(null), p -> sample(p, 0), "contaminant", "(none)",
+                        "a contaminant of this project"),
+                error("sample concentration negative", p -> sample(p, 0).setConcentrationMilligramsPerKg(-1), p -> sample(p, 0),
+                        "concentrationMilligramsPerKg", "-1", "0 or more mg/kg"),
+                error("non-detect without limit", p -> sample(p, 0).setNonDetect(true), p -> sample(p, 0), "detectionLimitMilligramsPerKg", "0",
+                        "greater than 0 mg/kg for a non-detect"),
+                error("detection limit negative", p -> sample(p, 0).setDetectionLimitMilligramsPerKg(-0.01), p -> sample(p, 0),
+                        "detectionLimitMilligramsPerKg", "-0.01", "0 or more mg/kg"),
+                // Schema 2: layers
+                error("swell negative", p -> layer(p, 0).setSwellFactor(-0.1), p -> layer(p, 0), "swellFactor", "-0.1", "[0, 1]"),
+                warning("swell of rock", p -> layer(p, 0).setSwellFactor(0.7), p -> layer(p, 0), "swellFactor", "0.7", "up to about 0.6"),
+                error("shrinkage too large", p -> layer(p, 0).setShrinkageFactor(0.5), p -> layer(p, 0), "shrinkageFactor", "0.5", "[0, 0.5)"),
+                error("dispersivity scale negative", p -> layer(p, 1).setDispersivityScaleMetres(-1), p -> layer(p, 1), "dispersivityScaleMetres",
+                        "-1", "0 (the layer thickness) or more m"),
+                error("Xu-Eckstein on a flow length of 1 m", p -> layer(p, 2).setDispersivityScaleMetres(0), p -> layer(p, 2),
+                        "dispersivityScaleMetres", "0", "a flow length above 1 m for Xu and Eckstein (1995) (0 uses the thickness 1 m)"),
+                // Schema 2: contaminants
+                error("Freundlich without Kf", p -> contaminant(p, 0).setIsotherm(SorptionIsotherm.FREUNDLICH), p -> contaminant(p, 0),
+                        "freundlichKfMgPerKgPerMgPerLitreToN", "0", "greater than 0 (mg/kg)/(mg/L)^n"),
+                warning("Freundlich exponent unusual", p -> { contaminant(p, 0).setIsotherm(SorptionIsotherm.FREUNDLICH);
+                    contaminant(p, 0).setFreundlichKfMgPerKgPerMgPerLitreToN(0.2); contaminant(p, 0).setFreundlichExponent(2.5); },
+                        p -> contaminant(p, 0), "freundlichExponent", "2.5", "usually 0.3 to 1.5"),
+                error("Langmuir without maximum", p -> { contaminant(p, 0).setIsotherm(SorptionIsotherm.LANGMUIR);
+                    contaminant(p, 0).setLangmuirConstantLitresPerMilligram(0.1); }, p -> contaminant(p, 0), "langmuirMaximumMilligramsPerKg", "0",
+                        "greater than 0 mg/kg"),
+                error("Langmuir without constant", p -> { contaminant(p, 0).setIsotherm(SorptionIsotherm.LANGMUIR);
+                    contaminant(p, 0).setLangmuirMaximumMilligramsPerKg(50); }, p -> contaminant(p, 0), "langmuirConstantLitresPerMilligram", "0",
+                        "greater than 0 L/mg"),
+                error("beta zero", p -> { contaminant(p, 0).setNonequilibrium(NonequilibriumEntry.DIMENSIONLESS); contaminant(p, 0).setBeta(0); },
+                        p -> contaminant(p, 0), "beta", "0", "(0, 1]"),
+                error("omega negative", p -> { contaminant(p, 0).setNonequilibrium(NonequilibriumEntry.DIMENSIONLESS); contaminant(p, 0).setOmega(-1); },
+                        p -> contaminant(p, 0), "omega", "-1", "0 or more"),
+                error("mobile water fraction above one", p -> contaminant(p, 1).setMobileWaterFraction(1.2), p -> contaminant(p, 1),
+                        "mobileWaterFraction", "1.2", "(0, 1]"),
+                error("mobile site fraction negative", p -> contaminant(p, 1).setMobileSiteFraction(-0.1), p -> contaminant(p, 1),
+                        "mobileSiteFraction", "-0.1", "[0, 1]"),
+                error("mass-transfer rate negative", p -> contaminant(p, 1).setMassTransferRatePerDay(-0.05), p -> contaminant(p, 1),
+                        "massTransferRatePerDay", "-0.05", "0 or more 1/d"),
+                error("solubility negative", p -> contaminant(p, 0).setWaterSolubilityMilligramsPerLitre(-1), p -> contaminant(p, 0),
+                        "waterSolubilityMilligramsPerLitre", "-1", "0 (not given) or more mg/L"),
+                warning("property source empty", p -> contaminant(p, 0).setPropertySource(null), p -> contaminant(p, 0), "propertySource",
+                        "(empty)", "not empty"),
+                // C_w = C_T / (Kd + theta / rho_b): benzene in the silty sand, Kd = 61.7 x 0.002 = 0.1234 L/kg, theta / rho_b =
+                // 0.3 / 1.6 = 0.1875 L/kg: at 1750 mg/L (solubility as entered) C_T = 1750 x 0.3109 = 544.1 mg/kg (computed by hand).
+                warning("concentration above what water can dissolve", p -> source(p, 0).setSoilConcentrationMilligramsPerKg(600), p -> source(p, 0),
+                        "soilConcentrationMilligramsPerKg", "600", "below 544.1 mg/kg in layer 'Silty sand'"),
+                // Schema 2: cleanup levels
+                error("neither level entered", p -> level(p, 0).setSoilLevelEntered(false), p -> level(p, 0), "soilLevelEntered", "false",
+                        "a soil level, a pore-water level or both"),
+                error("pore-water level zero", p -> level(p, 1).setPorewaterLevelMilligramsPerLitre(0), p -> level(p, 1),
+                        "porewaterLevelMilligramsPerLitre", "0", "greater than 0 mg/L"),
+                // Schema 2: zone footprint
+                error("footprint of two vertices", p -> zone(p).getFootprint().subList(2, 4).clear(), p -> zone(p), "footprint", "2 vertices",
+                        "none, or at least 3 vertices"),
+                error("zone outside the site", p -> zone(p).getFootprint().get(1).setEastingMetres(85), p -> zone(p), "footprint", "vertex (85, 10)",
+                        "inside the site boundary"),
+                warning("entered area differs from the footprint", p -> zone(p).setAreaSquareMetres(500), p -> zone(p), "areaSquareMetres", "500",
+                        "0 or the footprint's area 450.0 m2"),
+                // Schema 2: flushing design
+                warning("two-region without nonequilibrium parameters", p -> contaminant(p, 1).setNonequilibrium(NonequilibriumEntry.EQUILIBRIUM),
+                        p -> p.getFlushingDesigns().get(1), "solutionMethod", "TWO_REGION", "a contaminant with nonequilibrium parameters"),
+                error("too few cells", p -> design(p).setNumericalCellCount(5), p -> design(p), "numericalCellCount", "5", "[10, 100000]"),
+                error("tolerance too loose", p -> design(p).setNumericalRelativeTolerance(0.1), p -> design(p), "numericalRelativeTolerance", "0.1",
+                        "(0, 0.01]"),
+                error("monitoring interval zero", p -> design(p).setMonitoringIntervalDays(0), p -> design(p), "monitoringIntervalDays", "0",
+                        "greater than 0 d"),
+                error("amendment dose negative", p -> design(p).setAmendmentDoseKilogramsPerCubicMetre(-2), p -> design(p),
+                        "amendmentDoseKilogramsPerCubicMetre", "-2", "0 (plain water) or more kg/m3"),
+                warning("amendment dose without a name", p -> p.getFlushingDesigns().get(1).setAmendmentName(" "), p -> p.getFlushingDesigns().get(1),
+                        "amendmentName", "(empty)", "the amendment's name when a dose is given"),
+                warning("no price book", p -> design(p).setPriceBook(null), p -> design(p), "priceBook", "(none)", "a price book of this project"),
+                error("foreign price book", p -> design(p).setPriceBook(SiteFactory.eINSTANCE.createPriceBook()), p -> design(p), "priceBook", "''",
+                        "a price book of this project"),
+                // Schema 2: excavation design
+                warning("excavation name empty", p -> dig(p).setName(""), p -> dig(p), "name", "(empty)", "not empty"),
+                error("excavation without zone", p -> dig(p).setZone(null), p -> dig(p), "zone", "(none)", "a treatment zone of this project"),
+                error("side slope negative", p -> dig(p).setSideSlopeHorizontalPerVertical(-1), p -> dig(p), "sideSlopeHorizontalPerVertical", "-1",
+                        "[0, 10]"),
+                // US OSHA 29 CFR 1926 Subpart P App. B Table B-1 [PUB] (REFERENCES.md): Type C 1-1/2 : 1, Type B 1 : 1, Type A 3/4 : 1.
+                warning("slope steeper than Table B-1 for Type C", p -> dig(p).setSideSlopeHorizontalPerVertical(1.0), p -> dig(p),
+                        "sideSlopeHorizontalPerVertical", "1", "at least 1.5 H : 1 V for TYPE_C"),
+                warning("slope steeper than Table B-1 for Type A", p -> { dig(p).setSoilType(ExcavationSoilType.TYPE_A);
+                    dig(p).setSideSlopeHorizontalPerVertical(0.5); }, p -> dig(p), "sideSlopeHorizontalPerVertical", "0.5", "at least 0.75 H : 1 V for TYPE_A"),
+                error("overdig negative", p -> dig(p).setOverdigMetres(-0.3), p -> dig(p), "overdigMetres", "-0.3", "0 or more m"),
+                error("truck capacity zero", p -> dig(p).setTruckHeapedCapacityCubicMetres(0), p -> dig(p), "truckHeapedCapacityCubicMetres", "0",
+                        "greater than 0 m3"),
+                error("truck payload negative", p -> dig(p).setTruckPayloadKilograms(-1), p -> dig(p), "truckPayloadKilograms", "-1", "greater than 0 kg"),
+                // Schema 2: price books
+                warning("price book name empty", p -> book(p).setName(""), p -> book(p), "name", "(empty)", "not empty"),
+                warning("currency not a code", p -> book(p).setCurrency("dollars"), p -> book(p), "currency", "'dollars'", "three-letter ISO 4217"),
+                warning("price book reference empty", p -> book(p).setReference(""), p -> book(p), "reference", "(empty)", "not empty"),
+                error("duplicate item code", p -> item(p, 1).setCode("EXCAVATION.bank"), p -> item(p, 1), "code", "'EXCAVATION.bank'",
+                        "a code no other item of the book has"),
+                warning("item code empty", p -> item(p, 0).setCode(""), p -> item(p, 0), "code", "(empty)", "not empty"),
+                error("item unit empty", p -> item(p, 0).setUnit(null), p -> item(p, 0), "unit", "(empty)", "not empty"),
+                error("item rate negative", p -> item(p, 0).setRatePerUnit(-18), p -> item(p, 0), "ratePerUnit", "-18", "0 or more"),
+                error("no currency anywhere", p -> book(p).setCurrency(""), p -> item(p, 0), "currency", "(empty)", "a currency here or on the price book"),
+                warning("item source note empty", p -> item(p, 2).setSourceNote(""), p -> item(p, 2), "sourceNote", "(empty)", "not empty"),
+                // Schema 2: column tests
+                error("column test without contaminant", p -> column(p).setContaminant(null), p -> column(p), "contaminant", "(none)",
+                        "a contaminant of this project"),
+                error("column test with a foreign layer", p -> column(p).setLayer(SiteFactory.eINSTANCE.createSoilLayer()), p -> column(p), "layer",
+                        "''", "a soil layer of this project or none"),
+                error("column length zero", p -> column(p).setColumnLengthMetres(0), p -> column(p), "columnLengthMetres", "0", "greater than 0 m"),
+                error("column flux zero", p -> column(p).setDarcyFluxMetresPerDay(0), p -> column(p), "darcyFluxMetresPerDay", "0", "greater than 0 m/d"),
+                error("column water content one", p -> column(p).setWaterContent(1), p -> column(p), "waterContent", "1", "(0, 1)"),
+                error("column bulk density zero", p -> column(p).setBulkDensityKgPerCubicMetre(0), p -> column(p), "bulkDensityKgPerCubicMetre", "0",
+                        "(0, 2650) kg/m3"),
+                error("column C0 zero", p -> column(p).setReferenceConcentrationMilligramsPerLitre(0), p -> column(p),
+                        "referenceConcentrationMilligramsPerLitre", "0", "greater than 0 mg/L"),
+                warning("column test with one point", p -> column(p).getPoints().subList(1, 5).clear(), p -> column(p), "points", "1 points",
+                        "at least 2 points"),
+                error("points out of order", p -> column(p).getPoints().get(2).setPoreVolumes(0.8), p -> column(p).getPoints().get(2), "poreVolumes",
+                        "0.8", "greater than the previous point's 1"),
+                error("relative concentration negative", p -> column(p).getPoints().get(0).setRelativeConcentration(-0.1),
+                        p -> column(p).getPoints().get(0), "relativeConcentration", "-0.1", "0 or more"),
+                warning("relative concentration far above one", p -> column(p).getPoints().get(0).setRelativeConcentration(1.5),
+                        p -> column(p).getPoints().get(0), "relativeConcentration", "1.5", "up to about 1.2"),
+                // Schema 2: revisions
+                warning("revision without author", p -> p.getRevisions().get(0).setAuthor(""), p -> p.getRevisions().get(0), "author", "(empty)", "not empty"),
+                warning("revision without time", p -> p.getRevisions().get(0).setTimestamp(null), p -> p.getRevisions().get(0), "timestamp", "(none)",
+                        "a date and time"),
+                warning("revision without summary", p -> p.getRevisions().get(0).setSummary(null), p -> p.getRevisions().get(0), "summary", "(empty)",
+                        "not empty"));
     }
 
     @ParameterizedTest(name = "{0}")
