@@ -26,6 +26,23 @@ public final class FlushingScreening {
         if (in == null) {
             throw new TransportInputException("layer", null, "a LayerFlushingInput");
         }
+        return estimate(in, FlushingModels.finiteLayer(LayerTransport.of(in)), criterion, targetFraction,
+                areaSquareMetres, maxPoreVolumes);
+    }
+
+    /**
+     * The same with a model of the caller's choice (for example {@link FlushingModels#twoRegion}
+     * built from {@code LayerTransport.of(in)}); the well-mixed and plug-flow estimates are those
+     * of the layer.
+     */
+    public static FlushingEstimate estimate(LayerFlushingInput in, FlushingModel model, CleanupCriterion criterion,
+            double targetFraction, OptionalDouble areaSquareMetres, double maxPoreVolumes) {
+        if (model == null) {
+            throw new TransportInputException("flushing model", null, "a model from FlushingModels");
+        }
+        if (in == null) {
+            throw new TransportInputException("layer", null, "a LayerFlushingInput");
+        }
         if (areaSquareMetres == null) {
             throw new TransportInputException("treated area (m2)", null, "a value or OptionalDouble.empty()");
         }
@@ -33,7 +50,6 @@ public final class FlushingScreening {
             TransportInputException.requirePositive("treated area (m2)", areaSquareMetres.getAsDouble());
         }
         LayerTransport t = LayerTransport.of(in);
-        FlushingModel model = FlushingModels.finiteLayer(t);
         PoreVolumeResult result = PoreVolumeSearch.solve(model, criterion, targetFraction, maxPoreVolumes);
 
         double wellMixed = FlushingModels.wellMixed(t).poreVolumeGuess(criterion, targetFraction);

@@ -38,6 +38,23 @@ final class FlushingScreeningTest {
     }
 
     @Test
+    void anotherModelCanBeChosen() {
+        FlushingModel two = FlushingModels.twoRegion(LayerTransport.of(LAYER),
+                TwoRegionParameters.physical(LAYER, 0.7, 0.5, 0.005));
+        FlushingEstimate e = FlushingScreening.estimate(LAYER, two, CleanupCriterion.MEAN_RESIDUAL, 0.05,
+                OptionalDouble.of(400), 500);
+        FlushingEstimate eq = FlushingScreening.estimate(LAYER, CleanupCriterion.MEAN_RESIDUAL, 0.05,
+                OptionalDouble.of(400), 500);
+        assertEquals("two-region", e.modelName());
+        // common practice (DESIGN.md): nonequilibrium tails need more pore volumes than equilibrium
+        assertTrue(e.result().poreVolumes() > eq.result().poreVolumes(), e.result() + " " + eq.result());
+        assertEquals(eq.wellMixedPoreVolumes(), e.wellMixedPoreVolumes(), 0);
+        assertEquals("flushing model", assertThrows(TransportInputException.class,
+                () -> FlushingScreening.estimate(LAYER, null, CleanupCriterion.EFFLUENT, 0.1, OptionalDouble.empty(), 10))
+                .quantity());
+    }
+
+    @Test
     void withoutAreaThereIsNoWaterVolume() {
         FlushingEstimate e = FlushingScreening.estimate(LAYER, CleanupCriterion.EFFLUENT, 0.01, OptionalDouble.empty(), 200);
         assertFalse(e.waterVolumeCubicMetres().isPresent());
