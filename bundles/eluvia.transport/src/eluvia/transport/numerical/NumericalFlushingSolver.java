@@ -29,7 +29,8 @@ import eluvia.transport.TransportInputException;
  * Newton's method with the exact Jacobian, from the linear extrapolation of the last two states,
  * until the error left (the update itself, or the update times theta / (1 - theta) with theta the
  * observed contraction rate) is below the relative tolerance of the settings (default 1e-9) times
- * |C| plus 1e-12 times the reference concentration, in every cell; the slope of a Freundlich
+ * |C| (the larger of the value at the start of the step and the first guess) plus 1e-12 times the
+ * reference concentration, in every cell; the slope of a Freundlich
  * isotherm is taken at that absolute floor where C is smaller, which keeps the Jacobian finite at
  * C = 0. Typically two iterations a step.
  *
@@ -125,6 +126,8 @@ public final class NumericalFlushingSolver {
     private final double[] sci;
     private final double[] hd;
     private final double[] diagonal;
+    /** 1 / (Newton tolerance scale) per cell, from the step's start and first guess. */
+    private final double[] invScale;
     /** Isotherm value and slope at Newton's last iterate (before its last update, held in rhs). */
     private final double[] iterSorbed;
     private final double[] iterSlope;
@@ -312,6 +315,7 @@ public final class NumericalFlushingSolver {
         sci = new double[n];
         hd = new double[n];
         diagonal = new double[n];
+        invScale = new double[n];
         iterSorbed = new double[n];
         iterSlope = new double[n];
     }
@@ -915,6 +919,7 @@ public final class NumericalFlushingSolver {
                 guess = Math.max(c[i] + w * (c[i] - cPrev[i]), 0.25 * c[i]);
             }
             cNew[i] = guess;
+            invScale[i] = 1 / (relTol * Math.max(Math.abs(c[i]), Math.abs(guess)) + abs);
         }
         if (anyImmobile) {
             for (int i = 0; i < n; i++) {
@@ -927,6 +932,22 @@ public final class NumericalFlushingSolver {
         double hSrc = h * src0;
         double previousSize = Double.POSITIVE_INFINITY;
         for (int it = 1; it <= maxIt; it++) {
+            if (!anyImmobile) {
+                // one region: residual, Jacobian and forward sweep in one pass, back substitution
+                // and update in another
+                double size = fusedNewtonIteration(hSrc, abs);
+                if (!(size < Double.POSITIVE_INFINITY)) {
+                    lastNewtonIterations = it;
+                    return false;
+                }
+                double theta = size / previousSize;
+                previousSize = size;
+                if (size <= 1 || (it > 1 && theta < 0.5 && theta / (1 - theta) * size <= 1)) {
+                    lastNewtonIterations = it;
+                    return true;
+                }
+                continue;
+            }
             for (int i = 0; i < n; i++) {
                 double ci = cNew[i];
                 double s;
@@ -1002,7 +1023,7 @@ public final class NumericalFlushingSolver {
             for (int i = 0; i < n; i++) {
                 double d = rhs[i];
                 double next = cNew[i] + d;
-                size = Math.max(size, Math.abs(d) / (relTol * Math.abs(next) + abs));
+                size = Math.max(size, Math.abs(d) * invScale[i]);
                 cNew[i] = next;
             }
             if (anyImmobile) {
@@ -1031,6 +1052,71 @@ public final class NumericalFlushingSolver {
         }
         lastNewtonIterations = maxIt;
         return false;
+    }
+
+    /**
+     * One Newton iteration without immobile regions: returns the scaled size of the update (1 =
+     * the tolerance). The residual of cell i needs the old iterate of cell i + 1, which the
+     * forward sweep has not changed yet.
+     */
+    private double fusedNewtonIteration(double hSrc, double abs) {
+        double prevUp = 0;
+        double y = 0;
+        double left = 0;
+        for (int i = 0; i < n; i++) {
+            double ci = cNew[i];
+            double s;
+            double ds;
+            switch (kind[i]) {
+                case LINEAR -> {
+                    s = p1[i] * ci;
+                    ds = p1[i];
+                }
+                case FREUNDLICH -> {
+                    double a = Math.abs(ci);
+                    double aa = Math.max(a, abs);
+                    double pw = p1[i] * Math.pow(aa, p2[i]);
+                    ds = p2[i] * pw / aa;
+                    s = a >= abs ? pw : p1[i] * Math.pow(a, p2[i]);
+                    if (ci < 0) {
+                        s = -s;
+                    }
+                }
+                default -> {
+                    double d = 1 + p2[i] * Math.abs(ci);
+                    s = p1[i] * p2[i] * ci / d;
+                    ds = p1[i] * p2[i] / (d * d);
+                }
+            }
+            double transport = hd[i] * ci + lower[i] * left;
+            if (i + 1 < n) {
+                transport += upper[i] * cNew[i + 1];
+            }
+            left = ci;
+            double r = histM[i] - wc[i] * ci - sc[i] * s - transport;
+            if (i == 0) {
+                r += hSrc;
+            }
+            iterSorbed[i] = s;
+            iterSlope[i] = ds;
+            double inv = 1 / (wc[i] + sc[i] * ds + hd[i] - lower[i] * prevUp);
+            y = (r - lower[i] * y) * inv;
+            rhs[i] = y;
+            prevUp = upper[i] * inv;
+            factorUp[i] = prevUp;
+        }
+        double size = 0;
+        double next = rhs[n - 1];
+        cNew[n - 1] += next;
+        size = Math.abs(next) * invScale[n - 1];
+        for (int i = n - 2; i >= 0; i--) {
+            double d = rhs[i] - factorUp[i] * next;
+            rhs[i] = d;
+            cNew[i] += d;
+            size = Math.max(size, Math.abs(d) * invScale[i]);
+            next = d;
+        }
+        return size;
     }
 
     private double sorbed(int i, double cw) {
