@@ -10,8 +10,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.time.Instant;
 import java.util.List;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
@@ -24,6 +26,7 @@ import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import eluvia.site.internal.files.AtomicFileWriter;
 import eluvia.site.model.Project;
 import eluvia.site.tests.TestProjects;
 
@@ -60,6 +63,23 @@ final class AtomicSaveTest {
 
         assertEquals("save 2", ProjectFiles.load(folder.resolve("site.eluvia.bak")).getName());
         assertEquals(List.of("site.eluvia", "site.eluvia.bak"), names());
+    }
+
+    @Test
+    void temporaryFilesOfKilledSavesAreRemovedOnceStale() throws Exception {
+        Path file = folder.resolve("site.eluvia");
+        Path stale = Files.writeString(folder.resolve(".site.eluvia.12345" + AtomicFileWriter.TEMP_SUFFIX), "half a file");
+        Path staleBackup = Files.writeString(folder.resolve(".site.eluvia.bak.678" + AtomicFileWriter.TEMP_SUFFIX), "half a backup");
+        Path fresh = Files.writeString(folder.resolve(".site.eluvia.999" + AtomicFileWriter.TEMP_SUFFIX), "a save in progress");
+        Path otherFile = Files.writeString(folder.resolve(".other.eluvia.1" + AtomicFileWriter.TEMP_SUFFIX), "not ours");
+        FileTime old = FileTime.from(Instant.now().minus(AtomicFileWriter.STALE_TEMPORARY_AGE).minusSeconds(60));
+        for (Path p : List.of(stale, staleBackup, otherFile)) {
+            Files.setLastModifiedTime(p, old);
+        }
+
+        ProjectFiles.save(TestProjects.example(), file);
+
+        assertEquals(List.of(".other.eluvia.1.saving", ".site.eluvia.999.saving", "site.eluvia"), names());
     }
 
     @Test

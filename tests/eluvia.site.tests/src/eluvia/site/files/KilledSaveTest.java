@@ -70,7 +70,7 @@ final class KilledSaveTest {
             assertTrue(Arrays.equals(bytesA, backup) || Arrays.equals(bytesB, backup), "the backup is damaged");
             assertNotNull(ProjectFiles.load(folder.resolve("killed.eluvia" + ProjectFiles.BACKUP_SUFFIX)));
         }
-        // A later save still works and leaves the file in order (temporary files of killed saves may remain).
+        // A later save still works (temporary files of the killed saves are removed once stale, see AtomicSaveTest).
         ProjectFiles.save(a, target);
         assertArrayEquals(bytesA, Files.readAllBytes(target));
     }

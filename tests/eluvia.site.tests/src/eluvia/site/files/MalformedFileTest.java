@@ -44,6 +44,9 @@ final class MalformedFileTest {
                 Arguments.of("not XML at all", "name,porosity\nsand,0.35\n", 1, "not well-formed"),
                 Arguments.of("another root element", "<?xml version=\"1.0\"?>\n<project schemaVersion=\"1\"/>", 2,
                         "not an Eluvia project file"),
+                Arguments.of("bad date", HEAD + "  <revisions author=\"a\" timestamp=\"yesterday\"/>\n</site:Project>", 3,
+                        "timestamp = 'yesterday' is not a valid date and time"),
+                Arguments.of("truncated inside an attribute", HEAD + "  <contaminants name=\"Benz", 3, "not well-formed"),
                 Arguments.of("bad boolean", HEAD + "  <contaminants kdEntered=\"yes please\"/>\n</site:Project>", 3,
                         "not a valid true/false value"));
     }

@@ -4,13 +4,17 @@ import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.time.Duration;
+import java.time.Instant;
 import java.util.Set;
 
 /**
@@ -22,7 +26,11 @@ import java.util.Set;
  */
 public final class AtomicFileWriter {
 
-    private static final String TEMP_SUFFIX = ".saving";
+    /** Ending of the temporary files a save writes next to the target. */
+    public static final String TEMP_SUFFIX = ".saving";
+
+    /** Temporary files of killed saves older than this are removed by the next save. */
+    public static final Duration STALE_TEMPORARY_AGE = Duration.ofMinutes(10);
 
     private AtomicFileWriter() {
     }
@@ -36,6 +44,7 @@ public final class AtomicFileWriter {
         Path target = file.toAbsolutePath();
         Path folder = target.getParent();
         String fileName = target.getFileName().toString();
+        removeStaleTemporaries(folder, fileName);
         Path temp = Files.createTempFile(folder, "." + fileName + ".", TEMP_SUFFIX);
         try {
             copyPermissions(target, temp);
@@ -47,6 +56,27 @@ public final class AtomicFileWriter {
             forceFolder(folder);
         } finally {
             Files.deleteIfExists(temp);
+        }
+    }
+
+    /**
+     * Removes temporary files that a save killed part-way left behind, once they are older than
+     * {@link #STALE_TEMPORARY_AGE} (a save in progress elsewhere is never that old). Best effort.
+     */
+    private static void removeStaleTemporaries(Path folder, String fileName) {
+        String prefix = "." + fileName + ".";
+        FileTime cutoff = FileTime.from(Instant.now().minus(STALE_TEMPORARY_AGE));
+        try (DirectoryStream<Path> stream = Files.newDirectoryStream(folder, p -> {
+            String name = p.getFileName().toString();
+            return name.startsWith(prefix) && name.endsWith(TEMP_SUFFIX);
+        })) {
+            for (Path stale : stream) {
+                if (Files.getLastModifiedTime(stale).compareTo(cutoff) < 0) {
+                    Files.deleteIfExists(stale);
+                }
+            }
+        } catch (IOException e) {
+            // Leftovers are harmless; the save itself goes on.
         }
     }
 

@@ -84,7 +84,8 @@ public final class HostileInputGuard {
             return "the file contains a document type declaration (<!DOCTYPE ...>); project files never have one, "
                     + "and it could make the reader fetch other files or expand entities, so the file was not read";
         }
-        if (message.toLowerCase(java.util.Locale.ROOT).contains("entity")) {
+        String lower = message.toLowerCase(java.util.Locale.ROOT);
+        if (lower.contains("entity") && !lower.contains("same entity")) {
             return "the file uses an XML entity that is not allowed in project files; the file was not read ("
                     + message + ")";
         }

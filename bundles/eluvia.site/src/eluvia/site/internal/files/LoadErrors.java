@@ -72,6 +72,9 @@ public final class LoadErrors {
         if (type == boolean.class || type == Boolean.class) {
             return "true/false value";
         }
+        if (type == java.util.Date.class) {
+            return "date and time (written like 2026-12-01T12:00:00.000+0000)";
+        }
         if (type != null && type.isEnum()) {
             return "choice (one of " + java.util.Arrays.toString(type.getEnumConstants()) + ")";
         }
