@@ -9,6 +9,8 @@ import picocli.CommandLine.Command;
 /**
  * The headless command line: {@code demo}, {@code design}, {@code check} and {@code flush}.
  *
+ * Commands: {@code demo}, {@code design}, {@code check}, {@code flush} and {@code fit}.
+ *
  * <p>Exit codes: 0 success; 1 the project is not valid (its problems are printed, one a line);
  * 2 a bad command-line option or value (the message names the option and the allowed range);
  * 3 a file could not be read or written.
@@ -16,7 +18,7 @@ import picocli.CommandLine.Command;
 @Command(name = "eluvia", mixinStandardHelpOptions = true, versionProvider = EluviaCommand.Version.class,
         description = { "Eluvia: soil flushing and excavation design estimates.",
                 "Results are planning estimates; a licensed professional engineer must review them." },
-        subcommands = { DemoCommand.class, DesignCommand.class, CheckCommand.class, FlushCommand.class },
+        subcommands = { DemoCommand.class, DesignCommand.class, CheckCommand.class, FlushCommand.class, FitCommand.class },
         synopsisSubcommandLabel = "COMMAND")
 public final class EluviaCommand implements Callable<Integer> {
 
@@ -52,6 +54,11 @@ public final class EluviaCommand implements Callable<Integer> {
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> {
             if (ex instanceof OptionCheck) {
                 err.println(ex.getMessage());
+                return BAD_OPTION;
+            }
+            if (ex instanceof IllegalArgumentException) {
+                // the numerics refuse an input (TransportInputException and the like name the quantity and range)
+                err.println("input not accepted: " + ex.getMessage());
                 return BAD_OPTION;
             }
             if (ex instanceof java.io.IOException || ex instanceof java.io.UncheckedIOException) {

@@ -1,6 +1,8 @@
 package eluvia.app.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
@@ -8,52 +10,95 @@ import java.util.concurrent.Callable;
 import eluvia.report.Json;
 import eluvia.transport.CleanupCriterion;
 import eluvia.transport.FlushingEstimate;
+import eluvia.transport.FlushingModels;
 import eluvia.transport.FlushingScreening;
 import eluvia.transport.LayerFlushingInput;
 import eluvia.transport.LayerTransport;
+import eluvia.transport.ReboundEstimate;
+import eluvia.transport.TwoRegionParameters;
+import eluvia.transport.numerical.FlushingColumn;
+import eluvia.transport.numerical.FlushingRunRequest;
+import eluvia.transport.numerical.FlushingRunResult;
+import eluvia.transport.numerical.InitialCondition;
+import eluvia.transport.numerical.NumericalFlushingSolver;
+import eluvia.transport.numerical.SoilLayer;
+import eluvia.transport.numerical.SolverSettings;
+import eluvia.transport.numerical.SorptionIsotherm;
+import eluvia.transport.numerical.TargetOutcome;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
 
 /**
- * {@code flush}: one screening calculation for one homogeneous layer, from options alone, no
- * project file. All values SI.
+ * {@code flush}: one screening calculation from options alone, no project file. All values SI.
+ *
+ * <p>Models: {@code equilibrium} (finite layer, Brenner 1962), {@code two-region} (van Genuchten and
+ * Wierenga 1976, exact in the Laplace domain), {@code numerical} (finite volumes: layered profiles
+ * from {@code --layers}, Freundlich or Langmuir sorption).
  */
 @Command(name = "flush", mixinStandardHelpOptions = true, sortOptions = false,
-        description = { "Pore volumes of clean water to flush one homogeneous layer down to a target fraction of its initial concentration.",
-                "Finite-layer solution (flux inlet, zero-gradient outlet; Brenner 1962) with linear sorption and first-order decay.",
+        description = { "Pore volumes of clean water to flush a layer down to a target fraction of its initial concentration.",
+                "Models: equilibrium (finite layer, flux inlet, zero-gradient outlet; Brenner 1962), two-region",
+                "(nonequilibrium; van Genuchten and Wierenga 1976) and numerical (finite volumes; layered, nonlinear sorption).",
                 "Results are planning estimates; flushed water must be captured and treated." })
 final class FlushCommand implements Callable<Integer> {
 
     @ParentCommand
     EluviaCommand parent;
 
-    @Option(names = "--thickness-m", required = true, paramLabel = "M", description = "thickness of the treated layer, m (> 0)")
-    double thicknessMetres;
+    @Option(names = "--model", defaultValue = "equilibrium", paramLabel = "WORD", description = "equilibrium, two-region or numerical (default ${DEFAULT-VALUE})")
+    String model;
 
-    @Option(names = "--water-content", required = true, paramLabel = "FRACTION", description = "volumetric water content during flushing, (0, porosity]")
-    double waterContent;
+    @Option(names = "--thickness-m", paramLabel = "M", description = "thickness of the treated layer, m (> 0)")
+    Double thicknessMetres;
 
-    @Option(names = "--porosity", required = true, paramLabel = "FRACTION", description = "total porosity, (0, 1)")
-    double porosity;
+    @Option(names = "--water-content", paramLabel = "FRACTION", description = "volumetric water content during flushing, (0, porosity]")
+    Double waterContent;
 
-    @Option(names = "--bulk-density-kg-m3", required = true, paramLabel = "KG_M3", description = "dry bulk density, kg/m3 (> 0; soils 1100 to 2000)")
-    double bulkDensityKgPerCubicMetre;
+    @Option(names = "--porosity", paramLabel = "FRACTION", description = "total porosity, (0, 1)")
+    Double porosity;
 
-    @Option(names = "--kd-l-kg", required = true, paramLabel = "L_KG", description = "soil-water distribution coefficient, L/kg (>= 0)")
-    double kdLitresPerKg;
+    @Option(names = "--bulk-density-kg-m3", paramLabel = "KG_M3", description = "dry bulk density, kg/m3 (> 0; soils about 1100 to 2000)")
+    Double bulkDensityKgPerCubicMetre;
+
+    @Option(names = "--kd-l-kg", paramLabel = "L_KG", description = "soil-water distribution coefficient, L/kg (>= 0); linear sorption")
+    Double kdLitresPerKg;
+
+    @Option(names = "--dispersivity-m", paramLabel = "M", description = "longitudinal dispersivity, m (>= 0)")
+    Double dispersivityMetres;
+
+    @Option(names = "--layers", paramLabel = "FILE", description = "CSV of layers top to bottom (with --model numerical; replaces the single-layer options); see README")
+    Path layersFile;
 
     @Option(names = "--darcy-flux-m-d", required = true, paramLabel = "M_D", description = "Darcy flux of flushing water, m/d (> 0)")
     double darcyFluxMetresPerDay;
-
-    @Option(names = "--dispersivity-m", required = true, paramLabel = "M", description = "longitudinal dispersivity, m (>= 0)")
-    double dispersivityMetres;
 
     @Option(names = "--diffusion-m2-s", defaultValue = "1e-9", paramLabel = "M2_S", description = "free-water diffusion coefficient, m2/s (>= 0; default ${DEFAULT-VALUE})")
     double diffusionSquareMetresPerSecond;
 
     @Option(names = "--decay-per-day", defaultValue = "0", paramLabel = "PER_D", description = "first-order decay rate in water and on solids, 1/d (>= 0; default ${DEFAULT-VALUE})")
     double decayPerDay;
+
+    @Option(names = "--beta", paramLabel = "FRACTION", description = "two-region: equilibrium fraction of the retardation capacity, (0, 1]")
+    Double beta;
+
+    @Option(names = "--omega", paramLabel = "NUMBER", description = "two-region: dimensionless mass-transfer number, >= 0")
+    Double omega;
+
+    @Option(names = "--freundlich-kf", paramLabel = "KF", description = "numerical: Freundlich Kf, (mg/kg)/(mg/L)^n (> 0)")
+    Double freundlichKf;
+
+    @Option(names = "--freundlich-n", paramLabel = "N", description = "numerical: Freundlich exponent n (> 0)")
+    Double freundlichN;
+
+    @Option(names = "--langmuir-smax", paramLabel = "MG_KG", description = "numerical: Langmuir capacity Smax, mg/kg (> 0)")
+    Double langmuirSmax;
+
+    @Option(names = "--langmuir-k", paramLabel = "L_MG", description = "numerical: Langmuir affinity K, L/mg (> 0)")
+    Double langmuirK;
+
+    @Option(names = "--initial-soil-mg-kg", paramLabel = "MG_KG", description = "initial total soil concentration, mg/kg (> 0); needed with nonlinear sorption")
+    Double initialSoilMilligramsPerKg;
 
     @Option(names = "--area-m2", paramLabel = "M2", description = "infiltration area, m2 (> 0; optional: gives the water volume)")
     Double areaSquareMetres;
@@ -72,36 +117,167 @@ final class FlushCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LayerFlushingInput input = checkedInput();
+        String m = model.toLowerCase(Locale.ROOT);
+        if (!List.of("equilibrium", "two-region", "numerical").contains(m)) {
+            throw new OptionCheck("--model", model, "equilibrium, two-region or numerical");
+        }
         CleanupCriterion c = criterionOf(criterion);
         OptionalDouble area = areaSquareMetres == null ? OptionalDouble.empty()
                 : OptionalDouble.of(OptionCheck.positive("--area-m2", areaSquareMetres));
+        OptionCheck.positive("--darcy-flux-m-d", darcyFluxMetresPerDay);
+        OptionCheck.nonNegative("--diffusion-m2-s", diffusionSquareMetresPerSecond);
+        OptionCheck.nonNegative("--decay-per-day", decayPerDay);
         OptionCheck.openUnit("--target-fraction", targetFraction);
         OptionCheck.positive("--max-pore-volumes", maxPoreVolumes);
-        FlushingEstimate e = FlushingScreening.estimate(input, c, targetFraction, area, maxPoreVolumes);
+        if (!m.equals("two-region") && (beta != null || omega != null)) {
+            throw new OptionCheck(beta != null ? "--beta" : "--omega", beta != null ? beta : omega, "only with --model two-region");
+        }
+        boolean nonlinear = freundlichKf != null || freundlichN != null || langmuirSmax != null || langmuirK != null;
+        if (!m.equals("numerical") && (nonlinear || layersFile != null)) {
+            throw new OptionCheck(layersFile != null ? "--layers" : "the Freundlich and Langmuir options", "given",
+                    "only with --model numerical");
+        }
         PrintWriter out = parent.spec.commandLine().getOut();
+        if (m.equals("numerical")) {
+            return numerical(c, area, nonlinear, out);
+        }
+        LayerFlushingInput input = checkedInput(kdOption());
+        FlushingEstimate e;
+        ReboundEstimate rebound = null;
+        if (m.equals("two-region")) {
+            if (beta == null || omega == null) {
+                throw new OptionCheck(beta == null ? "--beta" : "--omega", "missing", "both --beta and --omega with --model two-region");
+            }
+            if (!(beta > 0 && beta <= 1)) {
+                throw new OptionCheck("--beta", beta, "greater than 0 and at most 1");
+            }
+            OptionCheck.nonNegative("--omega", omega);
+            TwoRegionParameters p = new TwoRegionParameters(beta, omega);
+            LayerTransport t = LayerTransport.of(input);
+            e = FlushingScreening.estimate(input, FlushingModels.twoRegion(t, p), c, targetFraction, area, maxPoreVolumes);
+            rebound = ReboundEstimate.afterEffluentMeetsTarget(t, p, targetFraction, maxPoreVolumes);
+        } else {
+            e = FlushingScreening.estimate(input, c, targetFraction, area, maxPoreVolumes);
+        }
         if (json) {
-            out.print(toJson(e));
+            out.print(toJson(e, rebound, Double.NaN));
         } else {
             printText(e, out);
+            if (rebound != null) {
+                out.println("rebound                       " + rebound.describe());
+            }
         }
         return EluviaCommand.OK;
     }
 
-    private LayerFlushingInput checkedInput() {
-        OptionCheck.positive("--thickness-m", thicknessMetres);
-        OptionCheck.openUnit("--porosity", porosity);
-        if (!(waterContent > 0 && waterContent <= porosity)) {
-            throw new OptionCheck("--water-content", waterContent, "greater than 0 and at most the porosity (" + porosity + ")");
+    private double kdOption() {
+        if (kdLitresPerKg == null) {
+            throw new OptionCheck("--kd-l-kg", "missing", "a number 0 or greater (required unless --layers is given)");
         }
-        OptionCheck.positive("--bulk-density-kg-m3", bulkDensityKgPerCubicMetre);
-        OptionCheck.nonNegative("--kd-l-kg", kdLitresPerKg);
-        OptionCheck.positive("--darcy-flux-m-d", darcyFluxMetresPerDay);
-        OptionCheck.nonNegative("--dispersivity-m", dispersivityMetres);
-        OptionCheck.nonNegative("--diffusion-m2-s", diffusionSquareMetresPerSecond);
-        OptionCheck.nonNegative("--decay-per-day", decayPerDay);
-        return new LayerFlushingInput(thicknessMetres, waterContent, porosity, bulkDensityKgPerCubicMetre, kdLitresPerKg,
-                darcyFluxMetresPerDay, dispersivityMetres, diffusionSquareMetresPerSecond, decayPerDay);
+        return OptionCheck.nonNegative("--kd-l-kg", kdLitresPerKg);
+    }
+
+    private static double required(String option, Double value) {
+        if (value == null) {
+            throw new OptionCheck(option, "missing", "required unless --layers is given with --model numerical");
+        }
+        return value;
+    }
+
+    private LayerFlushingInput checkedInput(double kd) {
+        double l = OptionCheck.positive("--thickness-m", required("--thickness-m", thicknessMetres));
+        double n = OptionCheck.openUnit("--porosity", required("--porosity", porosity));
+        double theta = required("--water-content", waterContent);
+        if (!(theta > 0 && theta <= n)) {
+            throw new OptionCheck("--water-content", theta, "greater than 0 and at most the porosity (" + n + ")");
+        }
+        double rho = OptionCheck.positive("--bulk-density-kg-m3", required("--bulk-density-kg-m3", bulkDensityKgPerCubicMetre));
+        double alpha = OptionCheck.nonNegative("--dispersivity-m", required("--dispersivity-m", dispersivityMetres));
+        return new LayerFlushingInput(l, theta, n, rho, kd, darcyFluxMetresPerDay, alpha, diffusionSquareMetresPerSecond,
+                decayPerDay);
+    }
+
+    private SorptionIsotherm isothermOption() {
+        if (freundlichKf != null || freundlichN != null) {
+            if (langmuirSmax != null || langmuirK != null) {
+                throw new OptionCheck("--langmuir-smax", "given with Freundlich options", "one isotherm: Freundlich or Langmuir");
+            }
+            double kf = OptionCheck.positive("--freundlich-kf", required("--freundlich-kf", freundlichKf));
+            double en = OptionCheck.positive("--freundlich-n", required("--freundlich-n", freundlichN));
+            return SorptionIsotherm.freundlich(kf, en);
+        }
+        if (langmuirSmax != null || langmuirK != null) {
+            double smax = OptionCheck.positive("--langmuir-smax", required("--langmuir-smax", langmuirSmax));
+            double k = OptionCheck.positive("--langmuir-k", required("--langmuir-k", langmuirK));
+            return SorptionIsotherm.langmuir(smax, k);
+        }
+        return SorptionIsotherm.linear(kdOption());
+    }
+
+    private int numerical(CleanupCriterion c, OptionalDouble area, boolean nonlinear, PrintWriter out) {
+        List<SoilLayer> layers;
+        if (layersFile != null) {
+            layers = LayersCsv.read(parent.environment.workingDirectory().resolve(layersFile), diffusionSquareMetresPerSecond,
+                    decayPerDay);
+        } else {
+            LayerFlushingInput in = checkedInput(nonlinear ? 0 : kdOption());
+            layers = List.of(SoilLayer.builder().thicknessMetres(in.thicknessMetres()).waterContent(in.waterContent())
+                    .porosity(in.porosity()).bulkDensityKilogramsPerCubicMetre(in.bulkDensityKgPerCubicMetre())
+                    .isotherm(isothermOption()).dispersivityMetres(in.dispersivityMetres())
+                    .freeWaterDiffusionSquareMetresPerSecond(diffusionSquareMetresPerSecond).decayInWaterPerDay(decayPerDay)
+                    .decayOnSolidsPerDay(decayPerDay).build());
+        }
+        boolean anyNonlinear = layers.stream().anyMatch(x -> !x.isotherm().isLinear());
+        double initial;
+        if (initialSoilMilligramsPerKg != null) {
+            initial = OptionCheck.positive("--initial-soil-mg-kg", initialSoilMilligramsPerKg);
+        } else if (anyNonlinear) {
+            throw new OptionCheck("--initial-soil-mg-kg", "missing", "a number greater than 0: nonlinear sorption depends on the concentration");
+        } else {
+            initial = 1; // linear: the fractions do not depend on the level
+        }
+        double[] soil = new double[layers.size()];
+        java.util.Arrays.fill(soil, initial);
+        FlushingColumn column = new FlushingColumn(layers, darcyFluxMetresPerDay, 0, InitialCondition.soilPerLayer(soil));
+        FlushingRunResult r = new NumericalFlushingSolver(column, SolverSettings.defaults())
+                .run(FlushingRunRequest.upToPoreVolumes(maxPoreVolumes).target(c, targetFraction).build());
+        TargetOutcome o = r.outcome(c);
+        double waterPerArea = column.poreVolumeMetres();
+        Json j = new Json().beginObject();
+        j.field("model", "numerical").field("criterion", c.word()).field("targetFraction", targetFraction)
+                .field("reachable", o.reached()).field("poreVolumes", o.poreVolumes()).field("durationDays", o.days());
+        j.name("waterVolumeM3");
+        if (area.isPresent() && o.reached()) {
+            j.value(o.poreVolumes() * waterPerArea * area.getAsDouble());
+        } else {
+            j.nullValue();
+        }
+        double rTheta = 0;
+        double theta = 0;
+        for (SoilLayer x : layers) {
+            double slope = x.isotherm().isLinear() ? x.isotherm().slopeLitresPerKilogram(0)
+                    : x.isotherm().sorbedMilligramsPerKilogram(r.initialPoreWaterMilligramsPerLitre()) / r.initialPoreWaterMilligramsPerLitre();
+            rTheta += x.thicknessMetres() * (x.waterContent() + x.bulkDensityKilogramsPerCubicMetre() / 1000 * slope);
+            theta += x.thicknessMetres() * x.waterContent();
+        }
+        double retardation = rTheta / theta;
+        j.field("retardation", retardation)
+                .field("retardationBasis", anyNonlinear ? "water-weighted over the layers, chord S/C at the initial pore-water concentration"
+                        : "water-weighted over the layers");
+        j.field("peclet", Double.NaN);
+        j.field("wellMixedPoreVolumes", -retardation * Math.log(targetFraction));
+        j.field("onePoreVolumeM3PerM2", waterPerArea).field("layers", layers.size()).field("cells", r.cellCount())
+                .field("massBalanceError", r.massBalance().relativeError()).field("remainingAtLimit", o.finalFraction())
+                .field("maxPoreVolumes", maxPoreVolumes);
+        String text = o.message();
+        if (json) {
+            out.print(j.endObject().toString());
+        } else {
+            out.println(text);
+            out.printf(Locale.ROOT, "mass balance relative error    %.3g%n", r.massBalance().relativeError());
+            out.println("CAUTION: planning estimate only; flushed water must be captured and treated; a licensed engineer decides.");
+        }
+        return EluviaCommand.OK;
     }
 
     private static CleanupCriterion criterionOf(String word) {
@@ -113,7 +289,7 @@ final class FlushCommand implements Callable<Integer> {
         throw new OptionCheck("--criterion", word, "effluent, mean or max");
     }
 
-    static String toJson(FlushingEstimate e) {
+    static String toJson(FlushingEstimate e, ReboundEstimate rebound, double massBalanceError) {
         LayerTransport t = e.transport();
         Json j = new Json().beginObject();
         j.field("model", e.modelName()).field("criterion", e.criterion().word())
@@ -134,18 +310,28 @@ final class FlushCommand implements Callable<Integer> {
                 .field("decayPerPoreVolume", t.decayPerPoreVolume())
                 .field("remainingAtLimit", e.result().remainingAtLimit())
                 .field("maxPoreVolumes", e.result().maxPoreVolumes());
+        if (!Double.isNaN(massBalanceError)) {
+            j.field("massBalanceError", massBalanceError);
+        }
+        if (rebound != null) {
+            j.field("reboundFraction", rebound.reboundAtOutletFraction())
+                    .field("reboundMeanFraction", rebound.reboundMeanFraction())
+                    .field("reboundMaxFraction", rebound.reboundMaxFraction())
+                    .field("waterMeetsButSoilDoesNot", rebound.waterMeetsButSoilDoesNot());
+        }
         return j.endObject().toString();
     }
 
     private static void printText(FlushingEstimate e, PrintWriter out) {
         LayerTransport t = e.transport();
+        out.printf(Locale.ROOT, "model                         %s%n", e.modelName());
         out.printf(Locale.ROOT, "retardation factor R          %.5g%n", t.retardation());
         out.printf(Locale.ROOT, "pore-water velocity           %.5g m/d%n", t.poreWaterVelocityMetresPerDay());
         out.printf(Locale.ROOT, "dispersion coefficient        %.5g m2/d%n", t.dispersionSquareMetresPerDay());
         out.printf(Locale.ROOT, "Peclet number of the layer    %.5g%n", t.peclet());
         out.printf(Locale.ROOT, "criterion                     %s, target %.4g of initial%n", e.criterion().description(), e.targetFraction());
         if (e.result().reachable()) {
-            out.printf(Locale.ROOT, "pore volumes to target        %.5g PV (%s)%n", e.result().poreVolumes(), e.modelName());
+            out.printf(Locale.ROOT, "pore volumes to target        %.5g PV%n", e.result().poreVolumes());
             out.printf(Locale.ROOT, "duration                      %.5g days of flushing%n", e.durationDays());
         } else {
             out.printf(Locale.ROOT, "pore volumes to target        not reachable within %.5g PV (%.3g of initial left)%n",

@@ -158,4 +158,111 @@ final class CommandLineTest {
         assertTrue(Files.isRegularFile(dir.resolve("eluvia-demo-output/results.json")));
         assertTrue(r.out().contains("invented"), r.out());
     }
+
+    private static final String[] LAYER = { "--water-content", "0.3", "--porosity", "0.35", "--bulk-density-kg-m3",
+            "1600", "--darcy-flux-m-d", "0.1", "--dispersivity-m", "0.1", "--target-fraction", "0.01", "--json" };
+
+    /** "flush", the common layer options, then the case's own. */
+    private static String[] flushArgs(String... more) {
+        return java.util.stream.Stream.of(java.util.stream.Stream.of("flush"), java.util.Arrays.stream(LAYER),
+                java.util.Arrays.stream(more)).flatMap(x -> x).toArray(String[]::new);
+    }
+
+    @Test
+    void numericalSolverAgreesWithTheFiniteLayerSeries(@TempDir Path dir) {
+        // Two independent methods for the same linear problem: the Brenner (1962) series and finite volumes.
+        Result series = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.2", "--criterion", "mean"));
+        Result fv = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.2",
+                "--criterion", "mean"));
+        assertEquals(0, series.code(), series.err());
+        assertEquals(0, fv.code(), fv.err());
+        double a = number(series.out(), "poreVolumes");
+        assertEquals(a, number(fv.out(), "poreVolumes"), a * 0.005);
+        // mass balance of the numerical run (in, out, stored) closes to machine level
+        assertTrue(Math.abs(number(fv.out(), "massBalanceError")) < 1e-8, fv.out());
+    }
+
+    @Test
+    void freundlichWithUnitExponentIsLinearSorption(@TempDir Path dir) {
+        // S = Kf C^n with n = 1 is the linear isotherm S = Kd C with Kd = Kf (definition of the Freundlich form)
+        Result linear = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.5"));
+        Result freundlich = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1",
+                "--freundlich-kf", "0.5", "--freundlich-n", "1", "--initial-soil-mg-kg", "50"));
+        assertEquals(0, freundlich.code(), freundlich.err());
+        double a = number(linear.out(), "poreVolumes");
+        assertEquals(a, number(freundlich.out(), "poreVolumes"), a * 1e-6);
+    }
+
+    @Test
+    void nonlinearSorptionNeedsTheInitialConcentration(@TempDir Path dir) {
+        Result r = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--langmuir-smax", "100",
+                "--langmuir-k", "0.1"));
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--initial-soil-mg-kg"), r.err());
+        Result wrongModel = run(dir, flushArgs("--thickness-m", "1", "--freundlich-kf", "1", "--freundlich-n", "0.8"));
+        assertEquals(2, wrongModel.code());
+        assertTrue(wrongModel.err().contains("--model numerical"), wrongModel.err());
+    }
+
+    @Test
+    void twoLayersOfTheSameSoilAreOneLayer(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("layers.csv"), "thickness_m,water_content,porosity,bulk_density_kg_m3,kd_l_kg,dispersivity_m\n"
+                + "0.5,0.3,0.35,1600,0.2,0.1\n0.5,0.3,0.35,1600,0.2,0.1\n");
+        Result layered = run(dir, flushArgs("--model", "numerical", "--layers", "layers.csv"));
+        Result single = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.2"));
+        assertEquals(0, layered.code(), layered.err());
+        double a = number(single.out(), "poreVolumes");
+        assertEquals(a, number(layered.out(), "poreVolumes"), a * 0.005);
+        Files.writeString(dir.resolve("bad.csv"), "thickness_m,water_content,porosity,bulk_density_kg_m3,kd_l_kg,dispersivity_m\n"
+                + "0.5,0.5,0.35,1600,0.2,0.1\n");
+        Result bad = run(dir, flushArgs("--model", "numerical", "--layers", "bad.csv"));
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("bad.csv line 2"), bad.err());
+    }
+
+    @Test
+    void twoRegionWithBetaOneIsEquilibriumAndReportsRebound(@TempDir Path dir) {
+        // beta = 1 puts all sorption capacity in equilibrium (van Genuchten and Wierenga 1976): the equilibrium result
+        Result eq = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.5"));
+        Result tr1 = run(dir, flushArgs("--model", "two-region", "--beta", "1", "--omega", "1",
+                "--thickness-m", "1", "--kd-l-kg", "0.5"));
+        assertEquals(0, tr1.code(), tr1.err());
+        double a = number(eq.out(), "poreVolumes");
+        assertEquals(a, number(tr1.out(), "poreVolumes"), a * 1e-4);
+        // with slow exchange, water meets the target before the soil does, and the water rebounds above it
+        Result tail = run(dir, flushArgs("--model", "two-region", "--beta", "0.4", "--omega", "0.2",
+                "--thickness-m", "1", "--kd-l-kg", "0.5"));
+        assertEquals(0, tail.code(), tail.err());
+        assertTrue(number(tail.out(), "poreVolumes") > a, "nonequilibrium tails need more pore volumes");
+        assertTrue(number(tail.out(), "reboundFraction") > 0.01, tail.out());
+        assertTrue(tail.out().contains("\"waterMeetsButSoilDoesNot\": true"), tail.out());
+    }
+
+    @Test
+    void fitRecoversRetardationAndPecletFromAnOgataBanksCurve(@TempDir Path dir) throws IOException {
+        // Breakthrough at the outlet of a semi-infinite column, Ogata and Banks (1961) with R = 2, P = 20,
+        // evaluated here with Commons Math 3.6.1 Erf (the flux-averaged concentration of the flux-inlet problem
+        // equals this first-type form, Parker and van Genuchten 1984)
+        double rr = 2;
+        double pp = 20;
+        StringBuilder csv = new StringBuilder("pore_volumes,relative_concentration\n");
+        for (double t = 0.5; t <= 5; t += 0.1) {
+            double s = 2 * Math.sqrt(rr * t / pp);
+            double c = 0.5 * org.apache.commons.math3.special.Erf.erfc((rr - t) / s)
+                    + 0.5 * Math.exp(pp) * org.apache.commons.math3.special.Erf.erfc((rr + t) / s);
+            csv.append(t).append(',').append(c).append('\n');
+        }
+        Files.writeString(dir.resolve("curve.csv"), csv.toString());
+        Result r = run(dir, "fit", "curve.csv", "--curve", "breakthrough", "--model", "semi-infinite", "--json");
+        assertEquals(0, r.code(), r.err());
+        Matcher m = Pattern.compile("\"name\": \"R\",\\s*\"value\": ([-0-9.eE+]+)").matcher(r.out());
+        assertTrue(m.find(), r.out());
+        assertEquals(rr, Double.parseDouble(m.group(1)), 1e-3);
+        Matcher p = Pattern.compile("\"name\": \"P\",\\s*\"value\": ([-0-9.eE+]+)").matcher(r.out());
+        assertTrue(p.find(), r.out());
+        assertEquals(pp, Double.parseDouble(p.group(1)), 0.05);
+        Result bad = run(dir, "fit", "curve.csv", "--curve", "sideways");
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("--curve"), bad.err());
+    }
 }
