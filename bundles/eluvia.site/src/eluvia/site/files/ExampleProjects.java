@@ -15,6 +15,9 @@ public final class ExampleProjects {
     /** File name of the shipped example, inside the bundle's {@code examples/} folder. */
     public static final String RIVERSIDE_DEPOT = "riverside-depot." + ProjectFiles.EXTENSION;
 
+    /** File name of invented sample results for the Riverside Depot example, in the sample-import CSV format. */
+    public static final String RIVERSIDE_DEPOT_SAMPLES = "riverside-depot-samples.csv";
+
     private ExampleProjects() {
     }
 
@@ -23,7 +26,7 @@ public final class ExampleProjects {
         InputStream in = ExampleProjects.class.getResourceAsStream("/examples/" + fileName);
         if (in == null) {
             throw new IOException("no example named '" + fileName + "' in bundle eluvia.site (expected examples/"
-                    + fileName + "); allowed: " + RIVERSIDE_DEPOT);
+                    + fileName + "); allowed: " + RIVERSIDE_DEPOT + ", " + RIVERSIDE_DEPOT_SAMPLES);
         }
         return in;
     }

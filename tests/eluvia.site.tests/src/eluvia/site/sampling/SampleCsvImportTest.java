@@ -144,6 +144,23 @@ final class SampleCsvImportTest {
     }
 
     @Test
+    void theShippedExampleSamplesImportCleanly() throws Exception {
+        Project project = TestProjects.example();
+        ImportReport report;
+        try (java.io.Reader reader = new java.io.InputStreamReader(
+                eluvia.site.files.ExampleProjects.open(eluvia.site.files.ExampleProjects.RIVERSIDE_DEPOT_SAMPLES),
+                java.nio.charset.StandardCharsets.UTF_8)) {
+            report = SampleCsvImport.read(reader, "riverside-depot-samples.csv", project);
+        }
+
+        assertEquals(List.of(), report.rejected());
+        assertEquals(8, report.samplesImported());
+        assertEquals(3, report.locations().size());
+        SampleCsvImport.addTo(project.getSite(), report);
+        assertFalse(eluvia.site.validation.SiteValidator.hasErrors(eluvia.site.validation.SiteValidator.validate(project)));
+    }
+
+    @Test
     void nullArgumentsAreRefused() {
         assertThrows(NullPointerException.class, () -> SampleCsvImport.read(null, "x", TestProjects.example()));
         assertThrows(NullPointerException.class, () -> SampleCsvImport.read(new StringReader(HEADER), "x", null));
