@@ -9,9 +9,13 @@ import org.eclipse.e4.ui.workbench.modeling.EModelService;
 import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
 
-import eluvia.ui.editor.ProjectEditorPart;
+import eluvia.ui.internal.editor.ProjectEditorPart;
 
-/** Opens project files in project editors, reusing an editor already open on the same file. */
+/**
+ * Opens project files in the workbench's project editors, reusing an editor already open on the
+ * same file. The editors' part descriptor is {@code eluvia.ui.partdescriptor.projectEditor}; they
+ * go into the part stack {@link #EDITOR_STACK_ID} of the application model.
+ */
 public final class ProjectEditors {
 
     /** Id of the part stack that holds the project editors. */
@@ -20,6 +24,12 @@ public final class ProjectEditors {
     private ProjectEditors() {
     }
 
+    /**
+     * Opens a project file, or activates the editor already showing it.
+     *
+     * @param file the {@code .eluvia} file
+     * @return the editor's part
+     */
     public static MPart open(Path file, EPartService parts, EModelService models, MApplication app) {
         String path = file.toAbsolutePath().normalize().toString();
         for (MPart p : parts.getParts()) {

@@ -1,4 +1,4 @@
-package eluvia.ui;
+package eluvia.ui.internal;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;

@@ -1,4 +1,4 @@
-package eluvia.ui;
+package eluvia.ui.internal;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -19,6 +19,7 @@ import org.osgi.service.event.Event;
 
 import eluvia.design.Cautions;
 import eluvia.report.DesignPackage;
+import eluvia.ui.ProjectEditors;
 import jakarta.inject.Inject;
 
 /**
@@ -68,8 +69,8 @@ public final class StartupAddon {
             // unreadable: show the cautions again
         }
         Shell shell = Display.getDefault().getActiveShell();
-        MessageDialogWithToggle d = MessageDialogWithToggle.openInformation(shell, "Eluvia: before you start",
-                text, "I have read these cautions; don't show them at start again", false, null, null);
+        MessageDialogWithToggle d = MessageDialogWithToggle.openInformation(shell, Messages.Startup_cautionsTitle,
+                text, Messages.Startup_cautionsToggle, false, null, null);
         if (d.getToggleState()) {
             try {
                 Files.createDirectories(ack.getParent());

@@ -1,4 +1,4 @@
-package eluvia.ui;
+package eluvia.ui.internal;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
@@ -15,15 +15,10 @@ public final class WelcomePart {
     public void createControls(Composite parent) {
         parent.setLayout(new GridLayout(1, false));
         Label title = new Label(parent, SWT.NONE);
-        title.setText("Eluvia: soil flushing and excavation design");
+        title.setText(Messages.Welcome_title);
         title.setFont(org.eclipse.jface.resource.JFaceResources.getHeaderFont());
         Label body = new Label(parent, SWT.WRAP);
-        body.setText("Open a project with File > Open Project... (Ctrl+O), or try File > Open Example Project "
-                + "(an invented site with invented numbers).\n\n"
-                + "For each flushing design Eluvia estimates the pore volumes of water needed to bring the zone "
-                + "down to its cleanup level by each criterion (effluent leaving the layer, mean residual and "
-                + "maximum residual in the layer), how long that takes and how much water must be captured and "
-                + "treated.");
+        body.setText(Messages.Welcome_body);
         GridData gd = new GridData(SWT.FILL, SWT.TOP, true, false);
         gd.widthHint = 600;
         body.setLayoutData(gd);

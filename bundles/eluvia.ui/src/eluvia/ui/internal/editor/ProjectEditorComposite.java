@@ -1,334 +1,190 @@
-package eluvia.ui.editor;
+package eluvia.ui.internal.editor;
 
-import java.util.LinkedHashMap;
-import java.util.Locale;
-import java.util.Map;
+import java.util.ArrayList;
+import java.util.List;
 
+import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.swt.SWT;
-import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.CTabFolder;
+import org.eclipse.swt.custom.CTabItem;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
-import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
-import org.eclipse.swt.widgets.Group;
-import org.eclipse.swt.widgets.Label;
-import org.eclipse.swt.widgets.TabFolder;
-import org.eclipse.swt.widgets.TabItem;
-import org.eclipse.swt.widgets.Table;
-import org.eclipse.swt.widgets.TableColumn;
-import org.eclipse.swt.widgets.TableItem;
-import org.eclipse.swt.widgets.Text;
 
 import eluvia.design.Cautions;
-import eluvia.design.ContaminantFlushing;
-import eluvia.design.DesignInputException;
-import eluvia.design.DesignPipeline;
-import eluvia.design.DesignRun;
-import eluvia.design.FlushingDesignResult;
-import eluvia.site.model.ComplianceCriterion;
-import eluvia.site.model.Contaminant;
-import eluvia.site.model.FlushingDesign;
-import eluvia.site.model.Project;
-import eluvia.site.model.SoilLayer;
-import eluvia.site.model.TreatmentZone;
-import eluvia.site.validation.Problem;
-import eluvia.transport.CleanupCriterion;
-import eluvia.transport.FlushingEstimate;
-import eluvia.ui.Fields;
+import eluvia.site.library.PropertyLibrary;
+import eluvia.site.model.UnitSystem;
+import eluvia.ui.internal.Messages;
+import eluvia.ui.internal.document.Navigator;
+import eluvia.ui.internal.document.ProjectDocument;
+import eluvia.ui.internal.fields.Bindings;
+import eluvia.ui.internal.fields.FieldMessages;
+import eluvia.ui.internal.fields.UnitDisplay;
 
 /**
- * The project editor's content: the inputs on the left (site and layers, contaminants, zones,
- * flushing designs), the results on the right, recomputed through the design pipeline after
- * every good edit. The composite computes nothing itself.
+ * The project editor's content: a caution line, one page per part of the project (site, layers,
+ * contaminants, sampling, cleanup levels, zones, flushing, excavation, price books, column tests)
+ * and the message line for values that are kept as typed but not accepted. Every edit goes through
+ * the document's command stack. Results are not shown here but in the result views, which follow
+ * the active editor. The composite computes nothing.
  */
-public final class ProjectEditorComposite extends Composite {
+public final class ProjectEditorComposite extends Composite implements Navigator {
 
-    private final Project project;
-    private final Runnable onEdit;
-    private final Map<Text, String> fieldMessages = new LinkedHashMap<>();
-    private Label messageLabel;
-    private Table resultsTable;
-    private Label headline;
-    private Text notes;
-    private DesignRun lastRun;
+    private final ProjectDocument document;
+    private final PropertyLibrary library;
+    private final Color cautionColour;
+    private final Color badColour;
+    private UnitSystem units;
+    private CTabFolder tabs;
+    private FieldMessages messages;
+    private Bindings bindings;
+    private final List<EditorPage> pages = new ArrayList<>();
 
-    /**
-     * @param onEdit called after every change of the model (the part marks itself dirty)
-     */
-    public ProjectEditorComposite(Composite parent, Project project, Runnable onEdit) {
+    public ProjectEditorComposite(Composite parent, ProjectDocument document, UnitSystem units, PropertyLibrary library) {
         super(parent, SWT.NONE);
-        this.project = project;
-        this.onEdit = onEdit;
-        setLayout(new GridLayout(1, false));
-        cautionBanner();
-        SashForm sash = new SashForm(this, SWT.HORIZONTAL);
-        sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        inputs(sash);
-        results(sash);
-        sash.setWeights(45, 55);
-        recompute();
+        this.document = document;
+        this.library = library;
+        this.units = units;
+        cautionColour = new Color(252, 244, 226);
+        badColour = new Color(251, 226, 222);
+        GridLayout layout = new GridLayout(1, false);
+        layout.marginWidth = 0;
+        layout.marginHeight = 0;
+        layout.verticalSpacing = 0;
+        setLayout(layout);
+        Composite banner = Forms.caution(this, Cautions.LICENSED_REVIEW, cautionColour, 1);
+        ((GridData) banner.getLayoutData()).horizontalIndent = 0;
+        build(0);
     }
 
-    /** The last successful run, or null when the inputs have errors. */
-    public DesignRun lastRun() {
-        return lastRun;
-    }
-
-    /** The results table: one row per design, contaminant and criterion. */
-    Table resultsTable() {
-        return resultsTable;
-    }
-
-    /** The line above the table with the controlling figures. */
-    Label headline() {
-        return headline;
-    }
-
-    /** The message line under the inputs (bad values, validation errors). */
-    Label messageLabel() {
-        return messageLabel;
-    }
-
-    private void cautionBanner() {
-        Composite banner = new Composite(this, SWT.BORDER);
-        banner.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        banner.setLayout(new GridLayout(1, false));
-        Color amber = new Color(255, 246, 229);
-        banner.setBackground(amber);
-        for (String c : Cautions.forFlushing()) {
-            Label l = new Label(banner, SWT.WRAP);
-            l.setText("\u26a0 " + c);
-            l.setBackground(amber);
-            GridData gd = new GridData(SWT.FILL, SWT.TOP, true, false);
-            gd.widthHint = 600;
-            l.setLayoutData(gd);
+    private void build(int selectedPage) {
+        if (tabs != null) {
+            tabs.dispose();
+            messages.label().dispose();
         }
-    }
-
-    private void inputs(Composite parent) {
-        Composite left = new Composite(parent, SWT.NONE);
-        left.setLayout(new GridLayout(1, false));
-        TabFolder tabs = new TabFolder(left, SWT.TOP);
+        pages.clear();
+        tabs = new CTabFolder(this, SWT.TOP | SWT.FLAT);
         tabs.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        flushingTab(tabs);
-        zonesTab(tabs);
-        layersTab(tabs);
-        contaminantsTab(tabs);
-        messageLabel = new Label(left, SWT.WRAP);
-        GridData gd = new GridData(SWT.FILL, SWT.TOP, true, false);
-        gd.widthHint = 400;
-        gd.heightHint = 48;
-        messageLabel.setLayoutData(gd);
-        messageLabel.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
-    }
-
-    private Composite tab(TabFolder tabs, String title) {
-        TabItem item = new TabItem(tabs, SWT.NONE);
-        item.setText(title);
-        Composite c = new Composite(tabs, SWT.NONE);
-        c.setLayout(new GridLayout(2, false));
-        item.setControl(c);
-        return c;
-    }
-
-    private void flushingTab(TabFolder tabs) {
-        Composite c = tab(tabs, "Flushing designs");
-        for (FlushingDesign d : project.getFlushingDesigns()) {
-            Group g = group(c, "Design: " + d.getName());
-            Fields.number(g, "Darcy flux (m/d)", d.getDarcyFluxMetresPerDay(), v -> v > 0, "greater than 0",
-                    v -> edit(() -> d.setDarcyFluxMetresPerDay(v)), this::fieldMessage);
-            Fields.number(g, "Operating days per week (d)", d.getOperatingDaysPerWeek(), v -> v > 0 && v <= 7,
-                    "greater than 0 and at most 7", v -> edit(() -> d.setOperatingDaysPerWeek(v)), this::fieldMessage);
-            Fields.number(g, "Capture efficiency (fraction)", d.getCaptureEfficiency(), v -> v > 0 && v <= 1,
-                    "greater than 0 and at most 1", v -> edit(() -> d.setCaptureEfficiency(v)), this::fieldMessage);
-            Fields.number(g, "Pore-volume limit (PV)", d.getMaxPoreVolumes(), v -> v > 0, "greater than 0",
-                    v -> edit(() -> d.setMaxPoreVolumes(v)), this::fieldMessage);
-            new Label(g, SWT.NONE).setText("Criterion");
-            Combo combo = new Combo(g, SWT.READ_ONLY);
-            for (CleanupCriterion k : CleanupCriterion.values()) {
-                combo.add(k.description());
-            }
-            combo.select(CleanupCriterion.valueOf(d.getCriterion().getName()).ordinal());
-            combo.addListener(SWT.Selection, e -> edit(() -> d.setCriterion(
-                    ComplianceCriterion.getByName(CleanupCriterion.values()[combo.getSelectionIndex()].name()))));
+        Composite messageHolder = this;
+        messages = new FieldMessages(messageHolder);
+        ((GridData) messages.label().getLayoutData()).exclude = true;
+        messages.label().setVisible(false);
+        bindings = new Bindings(document, new UnitDisplay(units), messages, badColour);
+        pages.add(new SitePage(bindings));
+        pages.add(new LayersPage(bindings));
+        pages.add(new ContaminantsPage(bindings, library));
+        pages.add(new SamplingPage(bindings, new SampleImport(bindings)));
+        pages.add(new CleanupLevelsPage(bindings));
+        pages.add(new ZonesPage(bindings));
+        pages.add(new FlushingPage(bindings, cautionColour));
+        pages.add(new ExcavationPage(bindings, cautionColour));
+        pages.add(new PriceBooksPage(bindings, cautionColour));
+        pages.add(new ColumnTestsPage(bindings));
+        for (EditorPage page : pages) {
+            CTabItem item = new CTabItem(tabs, SWT.NONE);
+            item.setText(page.title());
+            item.setData(page);
         }
-    }
-
-    private void zonesTab(TabFolder tabs) {
-        Composite c = tab(tabs, "Zones");
-        for (TreatmentZone z : project.getSite().getZones()) {
-            Group g = group(c, "Zone: " + z.getName());
-            Fields.number(g, "Area (m\u00b2)", z.getAreaSquareMetres(), v -> v > 0, "greater than 0",
-                    v -> edit(() -> z.setAreaSquareMetres(v)), this::fieldMessage);
-            Fields.number(g, "Top depth (m)", z.getTopDepthMetres(), v -> v >= 0, "0 or greater",
-                    v -> edit(() -> z.setTopDepthMetres(v)), this::fieldMessage);
-            Fields.number(g, "Bottom depth (m)", z.getBottomDepthMetres(), v -> v > 0, "greater than 0 and below the top",
-                    v -> edit(() -> z.setBottomDepthMetres(v)), this::fieldMessage);
-            z.getSourceConcentrations().forEach(s -> Fields.number(g,
-                    "Initial " + (s.getContaminant() == null ? "?" : s.getContaminant().getName()) + " (mg/kg)",
-                    s.getSoilConcentrationMilligramsPerKg(), v -> v > 0, "greater than 0",
-                    v -> edit(() -> s.setSoilConcentrationMilligramsPerKg(v)), this::fieldMessage));
-        }
-    }
-
-    private void layersTab(TabFolder tabs) {
-        Composite c = tab(tabs, "Soil layers");
-        Table t = table(c, "Layer", "Top (m)", "Bottom (m)", "Texture", "\u03c1b (kg/m\u00b3)", "Porosity", "\u03b8",
-                "foc", "Ks (m/d)", "\u03b1L (m)");
-        for (SoilLayer l : project.getSite().getLayers()) {
-            row(t, l.getName(), f(l.getTopDepthMetres()), f(l.getBottomDepthMetres()), l.getTextureClass(),
-                    f(l.getBulkDensityKgPerCubicMetre()), f(l.getPorosity()), f(l.getWaterContent()),
-                    f(l.getOrganicCarbonFraction()), f(l.getSaturatedConductivityMetresPerDay()),
-                    f(l.getDispersivityMetres()));
-        }
-        pack(t);
-    }
-
-    private void contaminantsTab(TabFolder tabs) {
-        Composite c = tab(tabs, "Contaminants");
-        Table t = table(c, "Contaminant", "CAS", "Koc (L/kg)", "Kd (L/kg)", "D0 (m\u00b2/s)", "Half-life (d)");
-        for (Contaminant x : project.getContaminants()) {
-            row(t, x.getName(), x.getCasNumber(), f(x.getKocLitresPerKg()), x.isKdEntered() ? f(x.getKdLitresPerKg()) : "from Koc",
-                    f(x.getDiffusionSquareMetresPerSecond()), x.getHalfLifeDays() > 0 ? f(x.getHalfLifeDays()) : "no decay");
-        }
-        pack(t);
-    }
-
-    private void results(Composite parent) {
-        Composite right = new Composite(parent, SWT.NONE);
-        right.setLayout(new GridLayout(1, false));
-        Label title = new Label(right, SWT.NONE);
-        title.setText("Results (recomputed after every edit)");
-        title.setFont(org.eclipse.jface.resource.JFaceResources.getBannerFont());
-        headline = new Label(right, SWT.WRAP);
-        GridData hd = new GridData(SWT.FILL, SWT.TOP, true, false);
-        hd.widthHint = 500;
-        headline.setLayoutData(hd);
-        resultsTable = table(right, "Design", "Contaminant", "Criterion", "Pore volumes (PV)", "Duration (calendar d)",
-                "Water applied (m\u00b3)");
-        ((GridData) resultsTable.getLayoutData()).horizontalSpan = 1;
-        notes = new Text(right, SWT.MULTI | SWT.WRAP | SWT.READ_ONLY | SWT.V_SCROLL | SWT.BORDER);
-        GridData nd = new GridData(SWT.FILL, SWT.FILL, true, false);
-        nd.heightHint = 110;
-        nd.widthHint = 500;
-        notes.setLayoutData(nd);
-    }
-
-    private void edit(Runnable change) {
-        change.run();
-        onEdit.run();
-        recompute();
-    }
-
-    /** Runs the design pipeline on the current model and shows the results or the problems. */
-    public void recompute() {
-        resultsTable.removeAll();
-        try {
-            lastRun = DesignPipeline.run(project);
-        } catch (DesignInputException e) {
-            lastRun = null;
-            StringBuilder b = new StringBuilder();
-            for (Problem p : e.problems()) {
-                b.append(p.message()).append('\n');
-            }
-            headline.setText("The inputs have errors; no results until they are fixed (see below).");
-            notes.setText(b.toString());
-            showMessages();
-            return;
-        } catch (RuntimeException e) {
-            lastRun = null;
-            headline.setText("No results: " + e.getMessage());
-            notes.setText("");
-            return;
-        }
-        StringBuilder head = new StringBuilder();
-        StringBuilder n = new StringBuilder();
-        for (FlushingDesignResult r : lastRun.flushing()) {
-            if (r.allReachable()) {
-                head.append(String.format(Locale.ROOT, "%s: %s PV by %s (%s controls), %s calendar days, %s m\u00b3 of water to capture%n",
-                        r.designName(), Fields.format(round(r.poreVolumes())), r.criterion().description(),
-                        r.controllingContaminant(), Fields.format(round(r.calendarDays())),
-                        Fields.format(round(r.waterCapturedCubicMetres()))));
-            } else {
-                head.append(r.designName()).append(": cleanup level not reached within the pore-volume limit\n");
-            }
-            for (ContaminantFlushing c : r.contaminants()) {
-                for (CleanupCriterion k : CleanupCriterion.values()) {
-                    FlushingEstimate e = c.estimate(k);
-                    boolean ok = e.result().reachable();
-                    double days = e.durationDays() * 7.0 / r.operatingDaysPerWeek();
-                    row(resultsTable, r.designName(), c.contaminantName(), k.description(),
-                            ok ? Fields.format(round(e.result().poreVolumes())) : "not reached",
-                            ok ? Fields.format(round(days)) : "\u2013",
-                            ok ? Fields.format(round(e.waterVolumeCubicMetres().orElse(Double.NaN))) : "\u2013");
-                }
-            }
-            r.notes().forEach(x -> n.append(x).append('\n'));
-        }
-        headline.setText(head.toString().trim());
-        notes.setText(n.toString());
-        pack(resultsTable);
-        showMessages();
+        tabs.addListener(SWT.Selection, e -> ensureCreated(tabs.getSelectionIndex()));
+        int index = Math.max(0, Math.min(selectedPage, pages.size() - 1));
+        tabs.setSelection(index);
+        ensureCreated(index);
         layout(true, true);
     }
 
-    private void fieldMessage(Text field, String message) {
-        if (message == null) {
-            fieldMessages.remove(field);
-        } else {
-            fieldMessages.put(field, message);
+    private void ensureCreated(int index) {
+        if (index < 0) {
+            return;
         }
-        showMessages();
-    }
-
-    private void showMessages() {
-        StringBuilder b = new StringBuilder();
-        fieldMessages.values().forEach(m -> b.append(m).append('\n'));
-        messageLabel.setText(b.toString().trim());
-    }
-
-    private static double round(double v) {
-        if (!Double.isFinite(v) || v == 0) {
-            return v;
+        CTabItem item = tabs.getItem(index);
+        if (item.getControl() == null) {
+            Composite body = new Composite(tabs, SWT.NONE);
+            ((EditorPage) item.getData()).create(body);
+            item.setControl(body);
+            body.layout(true, true);
         }
-        double scale = Math.pow(10, 3 - Math.ceil(Math.log10(Math.abs(v))));
-        return Math.round(v * scale) / scale;
     }
 
-    private static String f(double v) {
-        return Fields.format(v);
-    }
-
-    private static Group group(Composite parent, String title) {
-        Group g = new Group(parent, SWT.NONE);
-        g.setText(title);
-        g.setLayout(new GridLayout(2, false));
-        g.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 2, 1));
-        return g;
-    }
-
-    private static Table table(Composite parent, String... columns) {
-        Table t = new Table(parent, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL);
-        t.setHeaderVisible(true);
-        t.setLinesVisible(true);
-        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
-        gd.heightHint = 200;
-        t.setLayoutData(gd);
-        for (String c : columns) {
-            new TableColumn(t, SWT.LEFT).setText(c);
+    /** Shows numbers in another unit system (the pages are rebuilt; the model is untouched). */
+    public void setUnits(UnitSystem newUnits) {
+        if (newUnits == units) {
+            return;
         }
-        return t;
+        units = newUnits;
+        build(tabs.getSelectionIndex());
     }
 
-    private static void row(Table t, String... cells) {
-        TableItem item = new TableItem(t, SWT.NONE);
-        item.setText(cells);
+    public UnitSystem units() {
+        return units;
     }
 
-    private static void pack(Table t) {
-        for (TableColumn c : t.getColumns()) {
-            c.pack();
+    public ProjectDocument document() {
+        return document;
+    }
+
+    /** The tab folder (tests and navigation). */
+    public CTabFolder tabs() {
+        return tabs;
+    }
+
+    /** The messages of values kept as typed but not accepted. */
+    public List<String> fieldMessages() {
+        return messages.messages();
+    }
+
+    /** Selects a page by its index and builds it if needed. */
+    public void showPage(int index) {
+        tabs.setSelection(index);
+        ensureCreated(index);
+    }
+
+    /** The index of the page with the given title, or -1. */
+    public int pageIndex(String title) {
+        for (int i = 0; i < pages.size(); i++) {
+            if (pages.get(i).title().equals(title)) {
+                return i;
+            }
         }
+        return -1;
+    }
+
+    @Override
+    public boolean reveal(EObject object, EStructuralFeature feature) {
+        if (object == null) {
+            return false;
+        }
+        for (int i = 0; i < pages.size(); i++) {
+            ensureCreated(i);
+            CTabItem previous = tabs.getSelection();
+            tabs.setSelection(i);
+            if (pages.get(i).reveal(object, feature)) {
+                return true;
+            }
+            tabs.setSelection(previous);
+        }
+        if (object == document.project()) {
+            showPage(0);
+            return true;
+        }
+        return false;
+    }
+
+    @Override
+    public boolean setFocus() {
+        return tabs.setFocus();
+    }
+
+    @Override
+    public void dispose() {
+        super.dispose();
+        cautionColour.dispose();
+        badColour.dispose();
+    }
+
+    /** Title of the editor tab for a document, with the dirty marker handled by the workbench. */
+    public static String title(ProjectDocument document) {
+        return Messages.bind(Messages.Editor_title, document.file().getFileName());
     }
 }

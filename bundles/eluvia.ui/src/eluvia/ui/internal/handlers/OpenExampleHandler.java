@@ -1,6 +1,8 @@
-package eluvia.ui.handlers;
+package eluvia.ui.internal.handlers;
 
 import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.eclipse.e4.core.di.annotations.Execute;
@@ -10,11 +12,9 @@ import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.swt.widgets.Shell;
 
-import java.io.InputStream;
-import java.nio.file.Files;
-
 import eluvia.site.files.ExampleProjects;
 import eluvia.ui.ProjectEditors;
+import eluvia.ui.internal.Messages;
 
 /**
  * File > Open Example Project: copies the shipped (invented) example into
@@ -48,8 +48,8 @@ public final class OpenExampleHandler {
             Path file = copyExample(exampleFolder());
             ProjectEditors.open(file, parts, models, app);
         } catch (IOException e) {
-            MessageDialog.openError(shell, "Example project", "Could not copy the example project to "
-                    + exampleFolder() + ": " + e.getMessage());
+            MessageDialog.openError(shell, Messages.Example_title, Messages.bind(Messages.Example_copyFailed, exampleFolder(),
+                    e.getMessage()));
         }
     }
 }

@@ -1,4 +1,4 @@
-package eluvia.ui.handlers;
+package eluvia.ui.internal.handlers;
 
 import java.nio.file.Path;
 
@@ -10,7 +10,9 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Shell;
 
+import eluvia.site.files.ProjectFiles;
 import eluvia.ui.ProjectEditors;
+import eluvia.ui.internal.Messages;
 
 /** File > Open Project...: picks a {@code .eluvia} file and opens it in a project editor. */
 public final class OpenProjectHandler {
@@ -18,9 +20,9 @@ public final class OpenProjectHandler {
     @Execute
     public void execute(Shell shell, EPartService parts, EModelService models, MApplication app) {
         FileDialog dialog = new FileDialog(shell, SWT.OPEN);
-        dialog.setText("Open Eluvia project");
-        dialog.setFilterExtensions(new String[] { "*.eluvia", "*" });
-        dialog.setFilterNames(new String[] { "Eluvia projects (*.eluvia)", "All files" });
+        dialog.setText(Messages.Open_title);
+        dialog.setFilterExtensions(new String[] { "*." + ProjectFiles.EXTENSION, "*" });
+        dialog.setFilterNames(new String[] { Messages.Open_filterName, Messages.Open_allFiles });
         String chosen = dialog.open();
         if (chosen != null) {
             ProjectEditors.open(Path.of(chosen), parts, models, app);

@@ -1,4 +1,4 @@
-package eluvia.ui.handlers;
+package eluvia.ui.internal.handlers;
 
 import org.eclipse.e4.core.di.annotations.Execute;
 import org.eclipse.e4.ui.workbench.IWorkbench;

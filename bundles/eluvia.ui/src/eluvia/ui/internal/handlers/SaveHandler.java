@@ -1,23 +1,26 @@
-package eluvia.ui.handlers;
+package eluvia.ui.internal.handlers;
 
 import org.eclipse.e4.core.di.annotations.CanExecute;
 import org.eclipse.e4.core.di.annotations.Execute;
 import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.e4.ui.workbench.modeling.EPartService;
 
-import jakarta.inject.Named;
-import org.eclipse.e4.ui.services.IServiceConstants;
+import eluvia.ui.internal.document.OpenDocuments;
 
-/** File > Save: saves the active project editor. */
+/** File > Save: saves the active project. */
 public final class SaveHandler {
 
     @CanExecute
-    public boolean canExecute(@Named(IServiceConstants.ACTIVE_PART) @org.eclipse.e4.core.di.annotations.Optional MPart part) {
+    public boolean canExecute(EPartService parts, OpenDocuments documents) {
+        MPart part = Editors.activeEditor(parts, documents);
         return part != null && part.isDirty();
     }
 
     @Execute
-    public void execute(EPartService parts, @Named(IServiceConstants.ACTIVE_PART) MPart part) {
-        parts.savePart(part, false);
+    public void execute(EPartService parts, OpenDocuments documents) {
+        MPart part = Editors.activeEditor(parts, documents);
+        if (part != null) {
+            parts.savePart(part, false);
+        }
     }
 }

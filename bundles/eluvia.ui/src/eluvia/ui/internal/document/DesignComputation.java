@@ -1,0 +1,129 @@
+package eluvia.ui.internal.document;
+
+import java.util.function.Consumer;
+
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.IStatus;
+import org.eclipse.core.runtime.Status;
+import org.eclipse.core.runtime.jobs.Job;
+import org.eclipse.swt.widgets.Display;
+
+import eluvia.design.DesignInputException;
+import eluvia.design.DesignPipeline;
+import eluvia.design.DesignRun;
+import eluvia.site.model.Project;
+import eluvia.ui.internal.Messages;
+
+/**
+ * Keeps a document's results current: after every change (debounced), runs the design pipeline
+ * on a copy of the project in a cancellable Eclipse job and hands the outcome to a consumer on the
+ * UI thread. A newer change cancels a run in progress; results of a superseded run are dropped.
+ */
+public final class DesignComputation {
+
+    /** Quiet time after the last change before a run starts, milliseconds. */
+    public static final int DEBOUNCE_MILLISECONDS = 300;
+
+    private final ProjectDocument document;
+    private final Display display;
+    private final Consumer<ResultState> sink;
+    private final ProjectDocument.Listener listener;
+    private final Runnable start = this::start;
+    private long generation;
+    private Job job;
+    private DesignRun lastRun;
+    private boolean disposed;
+
+    public DesignComputation(ProjectDocument document, Display display, Consumer<ResultState> sink) {
+        this.document = document;
+        this.display = display;
+        this.sink = sink;
+        listener = new ProjectDocument.Listener() {
+            @Override
+            public void modelChanged(ProjectDocument d, org.eclipse.emf.common.notify.Notification n) {
+                schedule();
+            }
+        };
+        document.addListener(listener);
+    }
+
+    /** Starts a run after the debounce delay (restarting the delay when one is pending). */
+    public void schedule() {
+        if (disposed) {
+            return;
+        }
+        display.timerExec(-1, start);
+        display.timerExec(DEBOUNCE_MILLISECONDS, start);
+    }
+
+    /** Starts a run now. */
+    public void start() {
+        if (disposed) {
+            return;
+        }
+        display.timerExec(-1, start);
+        if (job != null) {
+            job.cancel();
+        }
+        long mine = ++generation;
+        Project copy = document.snapshot();
+        sink.accept(new ResultState(ResultState.Status.COMPUTING, lastRun, null, null, mine));
+        Job j = new Job(Messages.DesignComputation_jobName) {
+            @Override
+            protected IStatus run(IProgressMonitor monitor) {
+                monitor.beginTask(Messages.DesignComputation_jobName, IProgressMonitor.UNKNOWN);
+                ResultState state;
+                try {
+                    DesignRun run = DesignPipeline.run(copy);
+                    state = new ResultState(ResultState.Status.READY, run, null, null, mine);
+                } catch (DesignInputException e) {
+                    state = new ResultState(ResultState.Status.INPUT_ERRORS, null, e.problems(), null, mine);
+                } catch (RuntimeException e) {
+                    state = new ResultState(ResultState.Status.FAILED, null, null,
+                            e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage(), mine);
+                } finally {
+                    monitor.done();
+                }
+                if (monitor.isCanceled()) {
+                    return Status.CANCEL_STATUS;
+                }
+                ResultState done = state;
+                if (!display.isDisposed()) {
+                    display.asyncExec(() -> deliver(done));
+                }
+                return Status.OK_STATUS;
+            }
+        };
+        j.setSystem(true);
+        job = j;
+        j.schedule();
+    }
+
+    private void deliver(ResultState state) {
+        if (disposed || state.generation() != generation) {
+            return;
+        }
+        if (state.run() != null) {
+            lastRun = state.run();
+        }
+        sink.accept(state);
+    }
+
+    /** True while a run is scheduled or in progress. */
+    public boolean busy() {
+        Job j = job;
+        return j != null && j.getState() != Job.NONE;
+    }
+
+    /** Stops listening and cancels a run in progress. */
+    public void dispose() {
+        disposed = true;
+        document.removeListener(listener);
+        if (!display.isDisposed()) {
+            display.timerExec(-1, start);
+        }
+        if (job != null) {
+            job.cancel();
+        }
+    }
+}

@@ -1,0 +1,16 @@
+package eluvia.ui.internal.document;
+
+import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EStructuralFeature;
+
+/** An editor that can show a model object and put the keyboard focus on one of its fields. */
+public interface Navigator {
+
+    /**
+     * Brings the object into view (its page, its row) and focuses the field of the feature.
+     *
+     * @param feature the field to focus; null to show the object only
+     * @return false when the editor has no place for the object
+     */
+    boolean reveal(EObject object, EStructuralFeature feature);
+}

@@ -1,0 +1,33 @@
+package eluvia.ui.internal.handlers;
+
+import org.eclipse.e4.core.di.annotations.CanExecute;
+import org.eclipse.e4.core.di.annotations.Execute;
+import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.jface.window.Window;
+import org.eclipse.jface.wizard.WizardDialog;
+import org.eclipse.swt.widgets.Shell;
+
+import eluvia.ui.internal.Messages;
+import eluvia.ui.internal.document.OpenDocuments;
+import eluvia.ui.internal.wizards.ExportWizard;
+
+/** File > Export Design Package...: the export wizard for the active project. */
+public final class ExportHandler {
+
+    @CanExecute
+    public boolean canExecute(OpenDocuments documents) {
+        return documents.active() != null;
+    }
+
+    @Execute
+    public void execute(Shell shell, OpenDocuments documents) {
+        if (documents.active() == null) {
+            return;
+        }
+        ExportWizard wizard = new ExportWizard(documents.active());
+        if (new WizardDialog(shell, wizard).open() == Window.OK) {
+            MessageDialog.openInformation(shell, Messages.Export_title, Messages.bind(Messages.Export_done,
+                    wizard.written().size(), wizard.written().isEmpty() ? "" : wizard.written().get(0).getParent()));
+        }
+    }
+}

@@ -1,0 +1,22 @@
+package eluvia.ui.internal.handlers;
+
+import org.eclipse.e4.core.di.annotations.CanExecute;
+import org.eclipse.e4.core.di.annotations.Execute;
+
+import eluvia.ui.internal.document.OpenDocuments;
+
+/** Edit > Redo: redoes the last undone edit of the active project. */
+public final class RedoHandler {
+
+    @CanExecute
+    public boolean canExecute(OpenDocuments documents) {
+        return documents.active() != null && documents.active().canRedo();
+    }
+
+    @Execute
+    public void execute(OpenDocuments documents) {
+        if (documents.active() != null) {
+            documents.active().redo();
+        }
+    }
+}
