@@ -305,7 +305,7 @@ public final class HtmlDocumentWriter {
                 "ul { padding-left: 1.3rem; }",
                 "li { margin: 0.2rem 0; }",
                 ".table-wrap { overflow-x: auto; margin: 1rem 0 1.4rem; }",
-                "table { border-collapse: collapse; width: 100%; font-size: 0.88rem; font-variant-numeric: tabular-nums; }",
+                "table { border-collapse: collapse; width: 100%; font-size: 0.88rem; line-height: 1.35; font-variant-numeric: tabular-nums; }",
                 "caption { caption-side: top; text-align: left; font-size: 0.9rem; color: var(--ink); padding-bottom: 0.4rem; }",
                 ".label { font-weight: 650; color: var(--accent); }",
                 "th { text-align: left; vertical-align: bottom; font-weight: 600; background: var(--accent-tint);",

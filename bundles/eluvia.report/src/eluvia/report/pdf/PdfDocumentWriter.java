@@ -48,7 +48,8 @@ import eluvia.report.document.TextRun;
 
 /**
  * Writes a {@link Document} as an A4 PDF: a cover page (project, title, subtitle, metadata and the
- * sign-off block), then the sections with numbered headings, each page with a running header
+ * sign-off block), a contents page with the page of every section, then the sections with numbered
+ * headings, each page with a running header
  * (project name and title) and footer (revision, date, "Page n of N"). Tables split across pages
  * with their caption and header row repeated; figures are drawn as vector graphics (the chart is
  * painted through OpenPDF's {@code Graphics2D}), kept together with
@@ -69,6 +70,8 @@ public final class PdfDocumentWriter {
      * printed so that their 10 to 11 point labels print near 8 points, a size below the body text.
      */
     static final float CHART_SCALE = 0.78f;
+    /** Height of a row of the contents page, in points (fixed, so that the draft and the final layout agree). */
+    static final float CONTENTS_ROW_POINTS = 17f;
     /** The least room below a heading for the start of its text, in points; less moves it to the next page. */
     static final float MIN_ROOM_POINTS = 48f;
 
@@ -76,6 +79,7 @@ public final class PdfDocumentWriter {
     private final BaseFont bold;
     private final BaseFont italic;
     private com.lowagie.text.Document pdf;
+    private PageDecorations decorations;
     private PdfWriter writer;
     private int figureCount;
     private int tableCount;
@@ -114,10 +118,19 @@ public final class PdfDocumentWriter {
 
     /** Writes the document to {@code out} (not closed). */
     public static void write(Document document, OutputStream out) throws IOException {
-        new PdfDocumentWriter().render(document, out);
+        // The contents page lists the page of each section, known only once the sections are laid out:
+        // lay the document out once with blank page numbers (the contents rows have a fixed height, so
+        // the pages break the same way), then again with the numbers found.
+        PdfDocumentWriter draft = new PdfDocumentWriter();
+        draft.render(document, OutputStream.nullOutputStream(), null);
+        int[] pages = new int[document.sections().size()];
+        for (int i = 0; i < pages.length; i++) {
+            pages[i] = draft.decorations.sectionPage(i);
+        }
+        new PdfDocumentWriter().render(document, out, pages);
     }
 
-    private void render(Document d, OutputStream out) throws IOException {
+    private void render(Document d, OutputStream out, int[] sectionPages) throws IOException {
         DocumentMetadata m = d.metadata();
         pdf = new com.lowagie.text.Document(PageSize.A4, MARGIN_SIDE_POINTS, MARGIN_SIDE_POINTS, MARGIN_TOP_POINTS,
                 MARGIN_BOTTOM_POINTS);
@@ -132,9 +145,10 @@ public final class PdfDocumentWriter {
             writer = PdfWriter.getInstance(pdf, out);
             writer.setCloseStream(false);
             writer.setViewerPreferences(PdfWriter.PageModeUseOutlines);
-            writer.setPageEvent(new PageDecorations(m.projectName(), d.title(),
+            decorations = new PageDecorations(m.projectName(), d.title(),
                     "Revision " + m.revision() + "  \u00b7  " + m.date().format(DateTimeFormatter.ISO_LOCAL_DATE),
-                    titles, levels, regular));
+                    titles, levels, regular);
+            writer.setPageEvent(decorations);
             pdf.addTitle(PdfText.map(d.title()));
             pdf.addSubject(PdfText.map(m.projectName()));
             pdf.addCreator("Eluvia " + PdfText.map(m.productVersion()));
@@ -143,6 +157,8 @@ public final class PdfDocumentWriter {
             }
             pdf.open();
             cover(d);
+            pdf.newPage();
+            contents(d, numbers, sectionPages);
             pdf.newPage();
             for (int i = 0; i < d.sections().size(); i++) {
                 section(d.sections().get(i), numbers.get(i), i);
@@ -214,6 +230,53 @@ public final class PdfDocumentWriter {
         }
     }
 
+    // ------------------------------------------------------------------------------------ contents
+
+    /** Section numbers, headings and pages; {@code pages} null for the draft (no numbers, same layout). */
+    private void contents(Document d, List<String> numbers, int[] pages) throws DocumentException {
+        com.lowagie.text.Paragraph h = new com.lowagie.text.Paragraph("Contents", font(bold, 15f, Palette.INK));
+        h.setSpacingAfter(10);
+        pdf.add(h);
+        PdfPTable t = new PdfPTable(new float[] { 1f, 10f, 1.2f });
+        t.setWidthPercentage(100);
+        for (int i = 0; i < d.sections().size(); i++) {
+            Section s = d.sections().get(i);
+            BaseFont face = s.level() == 1 ? bold : regular;
+            float size = s.level() == 1 ? 10f : 9.5f;
+            PdfPCell number = new PdfPCell(new Phrase(numbers.get(i), font(face, size, Palette.ACCENT)));
+            float indent = 4 + 14 * (s.level() - 1);
+            float room = (pdf.right() - pdf.left()) * 10f / 12.2f - indent - 8;
+            PdfPCell heading = new PdfPCell(new Phrase(fitted(PdfText.map(s.heading()), face, size, room),
+                    font(face, size, Palette.INK)));
+            heading.setPaddingLeft(indent);
+            heading.setNoWrap(true);
+            String page = pages == null || pages[i] == 0 ? "" : Integer.toString(pages[i]);
+            PdfPCell pageCell = new PdfPCell(new Phrase(page, font(regular, size, Palette.INK)));
+            pageCell.setHorizontalAlignment(Element.ALIGN_RIGHT);
+            for (PdfPCell c : new PdfPCell[] { number, heading, pageCell }) {
+                c.setBorder(s.level() == 1 ? Rectangle.TOP : Rectangle.NO_BORDER);
+                c.setBorderColor(Palette.RULE);
+                c.setBorderWidth(0.5f);
+                c.setFixedHeight(CONTENTS_ROW_POINTS);
+                c.setVerticalAlignment(Element.ALIGN_MIDDLE);
+                t.addCell(c);
+            }
+        }
+        pdf.add(t);
+    }
+
+    /** The text, shortened with an ellipsis if it is wider than {@code widthPoints} (rows of fixed height do not wrap). */
+    private static String fitted(String text, BaseFont face, float size, float widthPoints) {
+        if (face.getWidthPoint(text, size) <= widthPoints) {
+            return text;
+        }
+        String t = text;
+        while (t.length() > 1 && face.getWidthPoint(t + "\u2026", size) > widthPoints) {
+            t = t.substring(0, t.length() - 1);
+        }
+        return t.stripTrailing() + "\u2026";
+    }
+
     // ------------------------------------------------------------------------------------ sections
 
     private void section(Section s, String number, int index) throws DocumentException {
@@ -228,7 +291,7 @@ public final class PdfDocumentWriter {
         }
         com.lowagie.text.Paragraph h = new com.lowagie.text.Paragraph();
         h.setLeading(size * 1.3f);
-        h.setSpacingBefore(s.level() == 1 ? 16 : 10);
+        h.setSpacingBefore(s.level() == 1 ? 12 : 8);
         h.setSpacingAfter(s.level() == 1 ? 6 : 4);
         Chunk num = new Chunk(number + "   ", font(bold, size, Palette.ACCENT));
         num.setGenericTag(PageDecorations.SECTION_TAG + index);
@@ -239,10 +302,11 @@ public final class PdfDocumentWriter {
         if (s.level() == 1) {
             PdfPTable rule = new PdfPTable(1);
             rule.setWidthPercentage(100);
+            rule.setSpacingBefore(5);
             PdfPCell line = new PdfPCell();
             line.setBorder(Rectangle.TOP);
             line.setBorderColor(Palette.ACCENT);
-            line.setBorderWidth(1.2f);
+            line.setBorderWidth(1.0f);
             line.setFixedHeight(6);
             rule.addCell(line);
             pdf.add(rule);
@@ -468,8 +532,8 @@ public final class PdfDocumentWriter {
     private PdfPTable caution(Caution c) {
         PdfPTable box = new PdfPTable(1);
         box.setWidthPercentage(100);
-        box.setSpacingBefore(6);
-        box.setSpacingAfter(10);
+        box.setSpacingBefore(4);
+        box.setSpacingAfter(8);
         box.setKeepTogether(true);
         PdfPCell cell = new PdfPCell();
         cell.setBackgroundColor(Palette.CAUTION_TINT);

@@ -26,6 +26,7 @@ import com.lowagie.text.pdf.SimpleBookmark;
 import com.lowagie.text.pdf.parser.PdfTextExtractor;
 
 import eluvia.report.document.Document;
+import eluvia.report.document.Paragraph;
 import eluvia.report.document.TestDocuments;
 
 /** The PDF reads back with OpenPDF's own reader: pages, text, vector figures, bookmarks. */
@@ -49,17 +50,24 @@ final class PdfDocumentWriterTest {
     void coverThenOnePagePerHintedBreak() throws IOException {
         byte[] pdf = PdfDocumentWriter.toBytes(TestDocuments.pagesApart(3));
         String[] pages = pagesText(pdf);
-        // a cover, then sections 1, 2 and 3 each on its own page (a break hint ends 1 and 2)
-        assertEquals(4, pages.length);
+        // a cover, the contents, then sections 1, 2 and 3 each on its own page (a break hint ends 1 and 2)
+        assertEquals(5, pages.length);
         assertTrue(pages[0].contains("Paged") && pages[0].contains("Licence number") && pages[0].contains("Signature"),
                 pages[0]);
         assertTrue(pages[0].contains(TestDocuments.SHA), "the cover names the project file digest");
         assertFalse(pages[0].contains("Page 1"), "the cover has no running footer");
-        for (int p = 2; p <= 4; p++) {
+        for (int s = 1; s <= 3; s++) {
+            // the contents give each section's page: section s is on page s + 2
+            assertTrue(Pattern.compile("(?m)^\\s*" + s + "\\s*Section " + s + "\\s*" + (s + 2) + "\\s*$").matcher(pages[1])
+                    .find(), pages[1]);
+        }
+        for (int p = 2; p <= 5; p++) {
             String text = pages[p - 1];
-            assertTrue(text.contains("Section " + (p - 1)), text);
+            if (p > 2) {
+                assertTrue(text.contains("Section " + (p - 2)), text);
+            }
             // the total is a form drawn after "of ", which the text extractor joins without a space
-            assertTrue(Pattern.compile("Page " + p + " of\\s*4").matcher(text).find(), text);
+            assertTrue(Pattern.compile("Page " + p + " of\\s*5").matcher(text).find(), text);
             assertTrue(text.contains("Invented test site"), "running header: " + text);
             assertTrue(text.contains("Revision B (for review)"), "footer: " + text);
         }
@@ -69,11 +77,12 @@ final class PdfDocumentWriterTest {
     void longTablesSplitAcrossPagesWithTheirHeaderRepeated() throws IOException {
         int rows = 150;
         String[] pages = pagesText(PdfDocumentWriter.toBytes(TestDocuments.longTable(rows)));
-        // rows are about 14 pt high and a page holds about 700 pt: 150 rows need three pages or more after the cover
-        assertTrue(pages.length >= 4, "pages: " + pages.length);
+        // rows are about 14 pt high and a page holds about 700 pt: 150 rows need three pages or more after
+        // the cover and the contents
+        assertTrue(pages.length >= 5, "pages: " + pages.length);
         Pattern label = Pattern.compile("R-(\\d{3})");
         List<Integer> seen = new ArrayList<>();
-        for (int p = 1; p < pages.length; p++) {
+        for (int p = 2; p < pages.length; p++) {
             Matcher m = label.matcher(pages[p]);
             boolean any = false;
             while (m.find()) {
@@ -156,6 +165,18 @@ final class PdfDocumentWriterTest {
             into.add(depth + ":" + m.get("Title"));
             collect((List<Map<String, Object>>) m.get("Kids"), into, depth + 1);
         }
+    }
+
+    @Test
+    void aHeadingTooLongForTheContentsLineIsShortenedThere() throws IOException {
+        String longHeading = "A heading far too long for one line of the contents page ".repeat(3).trim();
+        Document d = Document.builder("Long heading", TestDocuments.META).section(longHeading, 1, Paragraph.of("Text."))
+                .build();
+        String[] pages = pagesText(PdfDocumentWriter.toBytes(d));
+        assertEquals(3, pages.length);
+        assertTrue(pages[1].contains("A heading far too long") && pages[1].contains("\u2026"), pages[1]);
+        assertFalse(pages[1].contains(longHeading), "shortened on the contents page");
+        assertTrue(pages[2].replaceAll("\\s+", " ").contains(longHeading), "whole in the body");
     }
 
     @Test
