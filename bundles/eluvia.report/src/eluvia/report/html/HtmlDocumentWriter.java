@@ -21,6 +21,7 @@ import eluvia.report.document.Figure;
 import eluvia.report.document.KeyFigure;
 import eluvia.report.document.KeyFigures;
 import eluvia.report.document.PageBreak;
+import eluvia.report.document.ReportContentException;
 import eluvia.report.document.Paragraph;
 import eluvia.report.document.Section;
 import eluvia.report.document.SignOffBlock;
@@ -38,9 +39,10 @@ public final class HtmlDocumentWriter {
 
     /** The name of the page. */
     public static final String INDEX_HTML = "index.html";
-    /** Layout size of a figure in CSS pixels; the PNG has {@link #PIXEL_SCALE} times as many pixels. */
-    public static final int FIGURE_WIDTH = 760;
-    public static final int FIGURE_HEIGHT = 470;
+    /** Layout width of a figure in CSS pixels; the PNG is {@link #PIXEL_SCALE} times as wide in pixels. */
+    public static final int FIGURE_WIDTH_CSS_PX = 760;
+    /** Layout height of a figure in CSS pixels; the PNG is {@link #PIXEL_SCALE} times as high in pixels. */
+    public static final int FIGURE_HEIGHT_CSS_PX = 470;
     /** PNG pixels per CSS pixel, dimensionless. */
     public static final double PIXEL_SCALE = 2.0;
 
@@ -54,6 +56,10 @@ public final class HtmlDocumentWriter {
      * @return the files written: the page first, then a PNG and a CSV per figure in document order
      */
     public static List<Path> write(Document document, Path outDir) throws IOException {
+        if (document == null || outDir == null) {
+            throw new ReportContentException(document == null ? "document" : "output folder", "missing (null)",
+                    "a document and a folder to write it to", null);
+        }
         Files.createDirectories(outDir);
         List<Path> written = new ArrayList<>();
         Path page = outDir.resolve(INDEX_HTML);
@@ -61,7 +67,7 @@ public final class HtmlDocumentWriter {
         written.add(page);
         for (Figure f : document.figures()) {
             Path png = outDir.resolve(f.id() + ".png");
-            Files.write(png, Charts.png(f.chart(), (int) (FIGURE_WIDTH * PIXEL_SCALE), (int) (FIGURE_HEIGHT * PIXEL_SCALE),
+            Files.write(png, Charts.png(f.chart(), (int) (FIGURE_WIDTH_CSS_PX * PIXEL_SCALE), (int) (FIGURE_HEIGHT_CSS_PX * PIXEL_SCALE),
                     PIXEL_SCALE));
             written.add(png);
             Path csv = outDir.resolve(f.id() + ".csv");
@@ -148,7 +154,7 @@ public final class HtmlDocumentWriter {
         } else if (b instanceof Figure f) {
             int n = ++counters[0];
             h.append("<figure id=\"figure-").append(f.id()).append("\">\n<img src=\"").append(f.id())
-                    .append(".png\" width=\"").append(FIGURE_WIDTH).append("\" height=\"").append(FIGURE_HEIGHT)
+                    .append(".png\" width=\"").append(FIGURE_WIDTH_CSS_PX).append("\" height=\"").append(FIGURE_HEIGHT_CSS_PX)
                     .append("\" alt=\"Figure ").append(n).append(": ").append(esc(f.caption())).append("\">\n");
             h.append("<figcaption><span class=\"label\">Figure ").append(n).append(".</span> ").append(esc(f.caption()))
                     .append(" <a class=\"data\" href=\"").append(f.id()).append(".csv\">Data (CSV)</a></figcaption>\n");

@@ -40,6 +40,7 @@ import eluvia.report.document.Figure;
 import eluvia.report.document.KeyFigure;
 import eluvia.report.document.KeyFigures;
 import eluvia.report.document.PageBreak;
+import eluvia.report.document.ReportContentException;
 import eluvia.report.document.Paragraph;
 import eluvia.report.document.Section;
 import eluvia.report.document.SignOffBlock;
@@ -96,6 +97,9 @@ public final class PdfDocumentWriter {
 
     /** Writes the document to {@code file} (replaced if it exists). */
     public static void write(Document document, Path file) throws IOException {
+        if (file == null) {
+            throw new ReportContentException("PDF file", "missing (null)", "a path to write to", null);
+        }
         Path parent = file.toAbsolutePath().getParent();
         if (parent != null) {
             Files.createDirectories(parent);
@@ -118,6 +122,10 @@ public final class PdfDocumentWriter {
 
     /** Writes the document to {@code out} (not closed). */
     public static void write(Document document, OutputStream out) throws IOException {
+        if (document == null || out == null) {
+            throw new ReportContentException(document == null ? "document" : "output stream", "missing (null)",
+                    "a document and a stream to write it to", null);
+        }
         // The contents page lists the page of each section, known only once the sections are laid out:
         // lay the document out once with blank page numbers (the contents rows have a fixed height, so
         // the pages break the same way), then again with the numbers found.

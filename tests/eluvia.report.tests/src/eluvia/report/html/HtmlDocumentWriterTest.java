@@ -2,6 +2,7 @@ package eluvia.report.html;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
@@ -30,6 +31,7 @@ import eluvia.report.document.Document;
 import eluvia.report.document.Figure;
 import eluvia.report.document.KeyFigure;
 import eluvia.report.document.KeyFigures;
+import eluvia.report.document.ReportContentException;
 import eluvia.report.document.Section;
 import eluvia.report.document.Table;
 import eluvia.report.document.TestDocuments;
@@ -99,8 +101,8 @@ final class HtmlDocumentWriterTest {
             Path csv = dir.resolve(f.id() + ".csv");
             assertTrue(written.contains(png) && written.contains(csv));
             BufferedImage image = ImageIO.read(png.toFile());
-            assertEquals((int) (HtmlDocumentWriter.FIGURE_WIDTH * HtmlDocumentWriter.PIXEL_SCALE), image.getWidth());
-            assertEquals((int) (HtmlDocumentWriter.FIGURE_HEIGHT * HtmlDocumentWriter.PIXEL_SCALE), image.getHeight());
+            assertEquals((int) (HtmlDocumentWriter.FIGURE_WIDTH_CSS_PX * HtmlDocumentWriter.PIXEL_SCALE), image.getWidth());
+            assertEquals((int) (HtmlDocumentWriter.FIGURE_HEIGHT_CSS_PX * HtmlDocumentWriter.PIXEL_SCALE), image.getHeight());
             List<List<String>> rows = new ArrayList<>();
             // read back with Commons CSV 1.14.1, independent of our writer
             try (Reader r = Files.newBufferedReader(csv, StandardCharsets.UTF_8);
@@ -120,6 +122,12 @@ final class HtmlDocumentWriterTest {
         for (int i = 0; i < y.length; i++) {
             assertEquals(y[i], Double.parseDouble(lines.get(1 + i).split(",")[2]));
         }
+    }
+
+    @Test
+    void nothingToWriteIsRefused(@TempDir Path dir) {
+        assertThrows(ReportContentException.class, () -> HtmlDocumentWriter.write(null, dir));
+        assertThrows(ReportContentException.class, () -> HtmlDocumentWriter.write(TestDocuments.everyBlock(), null));
     }
 
     /** The page text with tags removed and the five escapes undone, white space collapsed. */

@@ -2,6 +2,7 @@ package eluvia.report.pdf;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -27,6 +28,7 @@ import com.lowagie.text.pdf.parser.PdfTextExtractor;
 
 import eluvia.report.document.Document;
 import eluvia.report.document.Paragraph;
+import eluvia.report.document.ReportContentException;
 import eluvia.report.document.TestDocuments;
 
 /** The PDF reads back with OpenPDF's own reader: pages, text, vector figures, bookmarks. */
@@ -177,6 +179,14 @@ final class PdfDocumentWriterTest {
         assertTrue(pages[1].contains("A heading far too long") && pages[1].contains("\u2026"), pages[1]);
         assertFalse(pages[1].contains(longHeading), "shortened on the contents page");
         assertTrue(pages[2].replaceAll("\\s+", " ").contains(longHeading), "whole in the body");
+    }
+
+    @Test
+    void nothingToWriteIsRefused() {
+        assertThrows(ReportContentException.class, () -> PdfDocumentWriter.toBytes(null));
+        assertThrows(ReportContentException.class,
+                () -> PdfDocumentWriter.write(TestDocuments.pagesApart(1), (java.io.OutputStream) null));
+        assertThrows(ReportContentException.class, () -> PdfDocumentWriter.write(TestDocuments.pagesApart(1), (Path) null));
     }
 
     @Test
