@@ -2,6 +2,7 @@ package eluvia.design;
 
 import java.util.List;
 
+import eluvia.cost.FlushingQuantities;
 import eluvia.transport.CleanupCriterion;
 import eluvia.transport.FlushingEstimate;
 
@@ -10,7 +11,8 @@ import eluvia.transport.FlushingEstimate;
  * controlling figures for the design's own criterion.
  *
  * <p>The controlling contaminant is the one that needs the most pore volumes under the design's
- * criterion; duration and water volumes follow from it. Operating days convert to calendar days
+ * criterion by the solution the design's solution method governs with ({@link ContaminantFlushing#governingMethod()});
+ * duration and water volumes follow from it. Operating days convert to calendar days
  * by the design's operating days per week. Applied water passes through the zone and must be
  * captured; the captured share is applied water times the capture efficiency, the rest escapes
  * the capture system (shown so the engineer can judge the groundwater risk).
@@ -33,13 +35,27 @@ import eluvia.transport.FlushingEstimate;
  * @param operatingDaysPerWeek operating days per week, d/week
  * @param captureEfficiency fraction of applied water captured (dimensionless)
  * @param notes plain-language notes on the result (warnings, bases)
+ * @param solutionMethod the design's solution method (EQUILIBRIUM, TWO_REGION or NUMERICAL)
+ * @param quantities the flushing take-off (eluvia.cost.FlushingQuantities: water applied, captured,
+ *        treated and escaping, durations, monitoring samples, amendment mass); null when the cleanup
+ *        level is not reached (the notes say why)
+ * @param pushDown per contaminant, how far below the treated column the flushing pushes soil above
+ *        its cleanup level over the design's pore volumes (empty when the level is not reached)
  */
 public record FlushingDesignResult(String designName, String zoneName, double zoneAreaSquareMetres,
         EffectiveLayer layer, double onePoreVolumeCubicMetres, CleanupCriterion criterion,
         List<ContaminantFlushing> contaminants, String controllingContaminant, boolean allReachable,
         double poreVolumes, double operatingDays, double calendarDays, double waterAppliedCubicMetres,
         double waterCapturedCubicMetres, double waterEscapingCubicMetres, double operatingDaysPerWeek,
-        double captureEfficiency, List<String> notes) {
+        double captureEfficiency, List<String> notes, String solutionMethod, FlushingQuantities quantities,
+        List<BelowLayerPush> pushDown) {
+
+    /** Copies the lists. */
+    public FlushingDesignResult {
+        contaminants = List.copyOf(contaminants);
+        notes = List.copyOf(notes);
+        pushDown = List.copyOf(pushDown);
+    }
 
     /** The controlling contaminant's estimate under the given criterion, or null. */
     public FlushingEstimate controllingEstimate(CleanupCriterion c) {

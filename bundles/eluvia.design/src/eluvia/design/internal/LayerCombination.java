@@ -4,9 +4,13 @@ import java.util.ArrayList;
 import java.util.List;
 
 import eluvia.design.EffectiveLayer;
+import eluvia.site.derived.Dispersivities;
 import eluvia.site.model.SoilLayer;
 
-/** Combines the soil layers overlapping a depth interval into one {@link EffectiveLayer}. */
+/**
+ * Combines the soil layers overlapping a depth interval into one {@link EffectiveLayer}. Each
+ * layer's dispersivity is the one its dispersivity rule gives ({@link Dispersivities}).
+ */
 public final class LayerCombination {
 
     private LayerCombination() {
@@ -39,7 +43,7 @@ public final class LayerCombination {
             n += overlap * layer.getPorosity();
             rho += overlap * layer.getBulkDensityKgPerCubicMetre();
             rhoFoc += overlap * layer.getBulkDensityKgPerCubicMetre() * layer.getOrganicCarbonFraction();
-            alpha += overlap * layer.getDispersivityMetres();
+            alpha += overlap * Dispersivities.effectiveDispersivityMetres(layer);
             if (layer.getSaturatedConductivityMetresPerDay() > 0) {
                 resistanceDaysPerMetre += overlap / layer.getSaturatedConductivityMetresPerDay();
             } else {
@@ -59,5 +63,38 @@ public final class LayerCombination {
         double ks = conductivityKnown ? total / resistanceDaysPerMetre : Double.NaN;
         return new EffectiveLayer(topDepthMetres, bottomDepthMetres, theta / total, n / total, rho / total,
                 rhoFoc / rho, alpha / total, ks, List.copyOf(names));
+    }
+
+    /**
+     * The part of one site layer inside a depth interval.
+     *
+     * @param layer the site layer
+     * @param topDepthMetres top of the part, m below ground
+     * @param bottomDepthMetres bottom of the part, m below ground
+     */
+    public record Slice(SoilLayer layer, double topDepthMetres, double bottomDepthMetres) {
+        /** Thickness of the part, m. */
+        public double thicknessMetres() {
+            return bottomDepthMetres - topDepthMetres;
+        }
+    }
+
+    /**
+     * The layers overlapping a depth interval, clipped to it, top first.
+     *
+     * @throws IllegalArgumentException as {@link #over} when no layer overlaps or the layers leave a gap
+     */
+    public static List<Slice> slices(List<? extends SoilLayer> layers, double topDepthMetres, double bottomDepthMetres) {
+        over(layers, topDepthMetres, bottomDepthMetres);
+        List<Slice> out = new ArrayList<>();
+        for (SoilLayer layer : layers) {
+            double top = Math.max(topDepthMetres, layer.getTopDepthMetres());
+            double bottom = Math.min(bottomDepthMetres, layer.getBottomDepthMetres());
+            if (bottom > top) {
+                out.add(new Slice(layer, top, bottom));
+            }
+        }
+        out.sort((a, b) -> Double.compare(a.topDepthMetres(), b.topDepthMetres()));
+        return List.copyOf(out);
     }
 }
