@@ -3,9 +3,29 @@ package eluvia.report;
 import static eluvia.report.internal.Html.esc;
 import static eluvia.report.internal.Html.num;
 
+import java.util.Locale;
+
+import eluvia.cost.Caution;
+import eluvia.cost.CostEstimate;
+import eluvia.cost.CostOfDelay;
+import eluvia.cost.LineItem;
+import eluvia.cost.Quantity;
+import eluvia.cost.QuantitySet;
+import eluvia.design.AlternativeResult;
+import eluvia.design.BelowLayerPush;
 import eluvia.design.ContaminantFlushing;
+import eluvia.design.ContaminantSpreading;
+import eluvia.design.ContaminantZone;
+import eluvia.design.CostOfDelayResult;
 import eluvia.design.DesignRun;
+import eluvia.design.EnlargementPoint;
+import eluvia.design.EnteredZoneComparison;
+import eluvia.design.ExcavationResult;
 import eluvia.design.FlushingDesignResult;
+import eluvia.design.FlushingMethod;
+import eluvia.design.MethodEstimate;
+import eluvia.design.ZoneAnalysis;
+import eluvia.design.ZoneEnlargement;
 import eluvia.site.model.CleanupLevel;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.FlushingDesign;
@@ -16,6 +36,7 @@ import eluvia.site.model.TreatmentZone;
 import eluvia.site.validation.Problem;
 import eluvia.transport.CleanupCriterion;
 import eluvia.transport.FlushingEstimate;
+import eluvia.transport.PoreVolumeResult;
 
 /**
  * The readable {@code index.html} of a design package: cautions, inputs exactly as used, methods
@@ -35,7 +56,19 @@ public final class SummaryHtml {
             { "Finite-layer flushing", "flux inlet, zero-gradient outlet: Brenner (1962), Chem. Eng. Sci. 17:229; "
                     + "initial-value form after van Genuchten and Alves (1982), USDA Tech. Bull. 1661" },
             { "Well-mixed estimate", "T = -R ln(C/C0) (US EPA pump-and-treat guidance; Zheng, Bennett and Andrews 1991)" },
-            { "Flux-averaged effluent", "Parker and van Genuchten (1984), Water Resour. Res. 20:866" }, };
+            { "Flux-averaged effluent", "Parker and van Genuchten (1984), Water Resour. Res. 20:866" },
+            { "Two-region nonequilibrium", "van Genuchten and Wierenga (1976), Soil Sci. Soc. Am. J. 40:473; Nkedi-Kizza et al. "
+                    + "(1984), Water Resour. Res. 20:1123; Laplace inversion of de Hoog, Knight and Stokes (1982)" },
+            { "Numerical layered flushing", "cell-centred finite volumes (Patankar 1980), variable-step BDF2 (Hairer, "
+                    + "Norsett and Wanner 1993), mass balance reported" },
+            { "Zone from samples", "inverse-distance weighting (Shepard 1968) or ordinary kriging (Matheron 1963; Isaaks and "
+                    + "Srivastava 1989) on a block model; blocks above the cleanup level counted whole" },
+            { "Enlargement by dispersion", "Crank (1975), The Mathematics of Diffusion, slab solution; products in three "
+                    + "directions (Hunt 1978, J. Hydraul. Div. ASCE 104:75); volume above the level integrated on a grid" },
+            { "Excavation", "prismoidal formula h/6 (A1 + 4 Am + A2); swell and shrinkage (Peurifoy, Table 4-1); side slopes "
+                    + "US OSHA 29 CFR 1926 Subpart P, App. B, Table B-1" },
+            { "Costs", "capital, annual O&M and periodic costs, contingency, professional and technical services, present "
+                    + "value P/A = [(1+i)^n - 1]/[i(1+i)^n], accuracy range: US EPA/USACE (2000) EPA 540-R-00-002" }, };
 
     /** The HTML text. */
     public static String of(Project project, DesignRun run, String projectSha256, String productVersion) {
@@ -68,6 +101,20 @@ public final class SummaryHtml {
             results(h, r);
         }
         h.append("</section>\n");
+        zones(h, run.zoneAnalysis());
+        enlargements(h, run);
+        excavations(h, run);
+        alternatives(h, run);
+        h.append("<section><h2>Settings of this run</h2><ul class=\"notes\">");
+        for (String x : run.settings().describe()) {
+            h.append("<li>").append(esc(x)).append("</li>");
+        }
+        for (String x : run.notes()) {
+            if (!x.startsWith("Settings of this run")) {
+                h.append("<li>").append(esc(x)).append("</li>");
+            }
+        }
+        h.append("</ul></section>\n");
 
         inputs(h, project);
 
@@ -117,11 +164,241 @@ public final class SummaryHtml {
             }
             h.append("</tr>");
         }
-        h.append("</table>\n<ul class=\"notes\">");
+        h.append("</table>\n");
+        methodTable(h, r);
+        if (!r.pushDown().isEmpty()) {
+            h.append("<h4>Contamination pushed below the treated column</h4><table><tr><th>Contaminant</th>"
+                    + "<th>Pore volumes flushed</th><th>Deepest below the column above the level (m)</th>"
+                    + "<th>Still above the level at the end (m)</th></tr>");
+            for (BelowLayerPush p : r.pushDown()) {
+                h.append("<tr><td>").append(esc(p.contaminantName())).append("</td>");
+                if (p.result() == null) {
+                    h.append("<td colspan=\"3\">not available: ").append(esc(p.unavailableReason())).append("</td>");
+                } else {
+                    h.append("<td>").append(num(p.result().poreVolumesFlushed(), 4)).append("</td><td>")
+                            .append(num(p.result().deepestBelowLayerMetres(), 3)).append("</td><td>")
+                            .append(num(p.result().belowLayerAtEndMetres(), 3)).append("</td>");
+                }
+                h.append("</tr>");
+            }
+            h.append("</table>\n");
+        }
+        if (r.quantities() != null) {
+            h.append("<h4>Flushing quantities</h4>");
+            quantities(h, r.quantities().toQuantitySet());
+        }
+        h.append("<ul class=\"notes\">");
         for (String n : r.notes()) {
             h.append("<li>").append(esc(n)).append("</li>");
         }
         h.append("</ul>\n");
+    }
+
+    private static void methodTable(StringBuilder h, FlushingDesignResult r) {
+        h.append("<h4>Pore volumes by solution (design method: ").append(esc(r.solutionMethod().toLowerCase(Locale.ROOT)))
+                .append(")</h4><table><tr><th>Contaminant</th><th>Solution</th>");
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            h.append("<th>PV by ").append(esc(k.description())).append("</th>");
+        }
+        h.append("<th>Note</th></tr>");
+        for (ContaminantFlushing c : r.contaminants()) {
+            for (MethodEstimate m : c.methods()) {
+                h.append("<tr><td>").append(esc(c.contaminantName())).append("</td><td>").append(esc(m.method().label()))
+                        .append(m.method() == c.governingMethod() ? " (governs)" : "").append("</td>");
+                for (CleanupCriterion k : CleanupCriterion.values()) {
+                    PoreVolumeResult x = m.result(k);
+                    h.append("<td>").append(x == null ? "\u2013" : x.reachable() ? num(x.poreVolumes(), 4) : "not reached")
+                            .append("</td>");
+                }
+                String note = m.available() ? "" : "not available: " + m.unavailableReason();
+                if (m.method() == FlushingMethod.TWO_REGION && c.twoRegion() != null) {
+                    note = "beta " + num(c.twoRegion().beta(), 4) + ", omega " + num(c.twoRegion().omega(), 4) + "; "
+                            + c.twoRegion().rebound().describe();
+                }
+                if (m.method() == FlushingMethod.NUMERICAL && c.numerical() != null) {
+                    note = c.numerical().cellCount() + " cells, " + c.numerical().acceptedSteps()
+                            + " steps, mass-balance error " + num(c.numerical().massBalanceRelativeError(), 2);
+                }
+                h.append("<td>").append(esc(note)).append("</td></tr>");
+            }
+        }
+        h.append("</table>\n");
+    }
+
+    private static void quantities(StringBuilder h, QuantitySet q) {
+        h.append("<table><tr><th>Quantity</th><th>Amount</th><th>Unit</th><th>Source</th></tr>");
+        for (Quantity x : q.all()) {
+            h.append("<tr><td>").append(esc(x.name())).append("</td><td>").append(num(x.amount(), 5)).append("</td><td>")
+                    .append(esc(x.unit().symbol())).append("</td><td>").append(esc(x.source())).append("</td></tr>");
+        }
+        h.append("</table>\n");
+    }
+
+    private static void zones(StringBuilder h, ZoneAnalysis z) {
+        h.append("<section><h2>Zone above the cleanup level from the samples</h2>");
+        if (!z.available()) {
+            h.append("<p>Not available: ").append(esc(z.unavailableReason())).append(".</p></section>\n");
+            return;
+        }
+        h.append("<p>").append(esc(z.estimator().label())).append(" on ").append(esc(z.blockModelBasis())).append(".</p>");
+        h.append("<p>").append(esc(z.exceedance().description())).append("</p>");
+        h.append("<table><tr><th>Contaminant</th><th>Cleanup level (mg/kg)</th><th>Samples</th><th>Non-detects</th>"
+                + "<th>Highest sample (mg/kg)</th><th>Blocks above</th><th>Volume above (m\u00b3)</th><th>Variogram</th></tr>");
+        for (ContaminantZone c : z.contaminants()) {
+            h.append("<tr><td>").append(esc(c.contaminantName())).append("</td><td>")
+                    .append(num(c.cleanupLevelMilligramsPerKg(), 4)).append("</td><td>").append(c.sampleCount())
+                    .append("</td><td>").append(c.nonDetectCount()).append("</td><td>")
+                    .append(num(c.maxSampleMilligramsPerKg(), 4)).append("</td><td>").append(c.exceedance().blockCount())
+                    .append("</td><td>").append(num(c.exceedance().volumeCubicMetres(), 4)).append("</td><td>")
+                    .append(esc(c.variogramBasis().isEmpty() ? "\u2013" : c.variogramBasis())).append("</td></tr>");
+        }
+        h.append("</table>");
+        if (z.proposedZone() != null) {
+            h.append(String.format(Locale.ROOT, "<p>Proposed treatment zone: %s m\u00b2 from %s to %s m deep, %s m\u00b3 (%s).</p>",
+                    num(z.proposedZone().footprint().areaSquareMetres(), 4), num(z.proposedZone().topDepthMetres(), 3),
+                    num(z.proposedZone().bottomDepthMetres(), 3), num(z.proposedZone().volumeCubicMetres(), 4),
+                    esc(z.proposedZone().basis())));
+        }
+        h.append("<table><tr><th>Entered zone</th><th>Volume (m\u00b3)</th><th>Estimated above, inside (m\u00b3)</th>"
+                + "<th>Estimated above, outside (m\u00b3)</th><th>Assessment</th></tr>");
+        for (EnteredZoneComparison e : z.enteredZones()) {
+            h.append("<tr><td>").append(esc(e.zoneName())).append("</td><td>").append(num(e.enteredVolumeCubicMetres(), 4))
+                    .append("</td><td>").append(num(e.estimatedInsideCubicMetres(), 4)).append("</td><td>")
+                    .append(num(e.estimatedOutsideCubicMetres(), 4)).append("</td><td>").append(esc(e.assessment()))
+                    .append("</td></tr>");
+        }
+        h.append("</table><ul class=\"notes\">");
+        z.notes().forEach(n -> h.append("<li>").append(esc(n)).append("</li>"));
+        h.append("</ul></section>\n");
+    }
+
+    private static void enlargements(StringBuilder h, DesignRun run) {
+        h.append("<section><h2>Enlargement by dispersion while the remedy waits</h2><p>").append(esc(ZoneEnlargement.METHOD))
+                .append(".</p>");
+        for (ZoneEnlargement e : run.enlargements()) {
+            h.append("<h3>Zone ").append(esc(e.zoneName())).append("</h3>");
+            if (!e.available()) {
+                h.append("<p>Not available: ").append(esc(e.unavailableReason())).append(".</p>");
+                continue;
+            }
+            h.append("<p>Source: ").append(esc(e.sourceBasis())).append(", ").append(num(e.sourceVolumeCubicMetres(), 4))
+                    .append(" m\u00b3.</p>");
+            h.append("<table><tr><th>Contaminant</th><th>Delay (years)</th><th>Volume above the level (m\u00b3)</th>"
+                    + "<th>Ratio to the source</th><th>Peak C/C0</th><th>Plan growth (m)</th><th>Top (m)</th><th>Bottom (m)</th></tr>");
+            for (ContaminantSpreading s : e.contaminants()) {
+                for (EnlargementPoint p : s.curve()) {
+                    point(h, s.contaminantName(), p);
+                }
+            }
+            for (EnlargementPoint p : e.envelope()) {
+                point(h, "envelope", p);
+            }
+            h.append("</table><ul class=\"notes\">");
+            e.notes().forEach(n -> h.append("<li>").append(esc(n)).append("</li>"));
+            h.append("</ul>");
+        }
+        h.append("</section>\n");
+    }
+
+    private static void point(StringBuilder h, String name, EnlargementPoint p) {
+        h.append("<tr><td>").append(esc(name)).append("</td><td>").append(num(p.delayYears(), 3)).append("</td><td>")
+                .append(num(p.volumeAboveLevelCubicMetres(), 4)).append("</td><td>").append(num(p.ratio(), 3))
+                .append("</td><td>").append(num(p.peakFraction(), 3)).append("</td><td>").append(num(p.planGrowthMetres(), 3))
+                .append("</td><td>").append(num(p.topDepthMetres(), 3)).append("</td><td>")
+                .append(num(p.bottomDepthMetres(), 3)).append("</td></tr>");
+    }
+
+    private static void excavations(StringBuilder h, DesignRun run) {
+        if (run.excavations().isEmpty()) {
+            return;
+        }
+        h.append("<section><h2>Excavation quantities</h2>");
+        for (ExcavationResult x : run.excavations()) {
+            h.append("<h3>Excavation design: ").append(esc(x.designName())).append(" (zone ").append(esc(x.zoneName()))
+                    .append(")</h3><p>Outline: ").append(esc(x.footprintBasis())).append(". Side slope: ")
+                    .append(esc(x.slopeBasis())).append(". Soil: ").append(esc(x.soilBasis())).append(".</p>");
+            quantities(h, x.quantities().toQuantitySet());
+            h.append("<ul class=\"notes\">");
+            for (Caution c : x.quantities().cautions()) {
+                h.append("<li><b>Caution:</b> ").append(esc(c.text())).append("</li>");
+            }
+            x.quantities().assumptions().forEach(n -> h.append("<li>").append(esc(n)).append("</li>"));
+            x.notes().forEach(n -> h.append("<li>").append(esc(n)).append("</li>"));
+            h.append("</ul>");
+        }
+        h.append("</section>\n");
+    }
+
+    private static void alternatives(StringBuilder h, DesignRun run) {
+        h.append("<section><h2>Alternatives side by side</h2><table><tr><th>Alternative</th><th>Capital</th>"
+                + "<th>Annual O&amp;M</th><th>Operating years</th><th>Present value</th><th>Range (low to high)</th>"
+                + "<th>Duration (calendar days)</th><th>Price book</th></tr>");
+        for (AlternativeResult a : run.alternatives()) {
+            h.append("<tr><td>").append(esc(a.name())).append(a.name().equals(run.lowestPresentValue()) ? " (lowest)" : "")
+                    .append("</td>");
+            if (!a.available()) {
+                h.append("<td colspan=\"7\">not available: ").append(esc(a.unavailableReason())).append("</td></tr>");
+                continue;
+            }
+            CostEstimate e = a.estimate();
+            h.append("<td>").append(money(e.capital().total().amount(), e.currency())).append("</td><td>")
+                    .append(money(e.annual().total().amount(), e.currency())).append("</td><td>").append(e.operatingYears())
+                    .append("</td><td>").append(money(e.presentValue().amount(), e.currency())).append("</td><td>")
+                    .append(money(e.presentValueLow().amount(), e.currency())).append(" to ")
+                    .append(money(e.presentValueHigh().amount(), e.currency())).append("</td><td>")
+                    .append(Double.isNaN(a.durationCalendarDays()) ? "not estimated" : num(a.durationCalendarDays(), 4))
+                    .append("</td><td>").append(esc(a.priceBookName())).append(a.inventedRates() ? " (INVENTED rates)" : "")
+                    .append("</td></tr>");
+        }
+        h.append("</table>");
+        for (AlternativeResult a : run.alternatives()) {
+            if (!a.available()) {
+                continue;
+            }
+            CostEstimate e = a.estimate();
+            h.append("<h3>").append(esc(a.name())).append("</h3><p>").append(esc(a.basis())).append(".</p>");
+            h.append("<table><tr><th>Cost</th><th>Quantity</th><th>Amount</th><th>Unit</th><th>Rate</th><th>Cost ("
+                    + esc(e.currency()) + ")</th><th>Quantity source</th></tr>");
+            for (LineItem l : e.lines()) {
+                h.append("<tr><td>").append(esc(l.spec().category().name().toLowerCase(Locale.ROOT).replace('_', ' ')))
+                        .append(": ").append(esc(l.item().description())).append(l.item().invented() ? " (invented)" : "")
+                        .append("</td><td>").append(esc(l.quantity().name())).append("</td><td>")
+                        .append(num(l.quantity().amount(), 5)).append("</td><td>").append(esc(l.quantity().unit().symbol()))
+                        .append("</td><td>").append(num(l.item().ratePerUnit(), 5)).append("</td><td>")
+                        .append(num(l.cost().amount(), 6)).append("</td><td>").append(esc(l.quantity().source()))
+                        .append("</td></tr>");
+            }
+            h.append("</table><ul class=\"notes\">");
+            // the trace after its per-line entries (shown in the table): markups, present value, accuracy, cautions
+            java.util.List<String> trace = e.trace();
+            for (String t : trace.subList(Math.min(trace.size(), 1 + e.lines().size()), trace.size())) {
+                h.append("<li>").append(esc(t)).append("</li>");
+            }
+            a.unpriced().forEach(u -> h.append("<li>Not priced: ").append(esc(u)).append("</li>"));
+            a.notes().forEach(n -> h.append("<li>").append(esc(n)).append("</li>"));
+            h.append("</ul>");
+        }
+        h.append("<h3>Cost of delay</h3><table><tr><th>Alternative</th><th>Delay (years)</th>"
+                + "<th>Present value at the start of work</th><th>Present value today</th><th>Increase today</th></tr>");
+        for (CostOfDelayResult c : run.costOfDelay()) {
+            if (!c.available()) {
+                h.append("<tr><td>").append(esc(c.alternativeName())).append("</td><td colspan=\"4\">not available: ")
+                        .append(esc(c.unavailableReason())).append("</td></tr>");
+                continue;
+            }
+            String cur = c.costOfDelay().baseline().estimate().currency();
+            for (CostOfDelay.Point p : c.points()) {
+                h.append("<tr><td>").append(esc(c.alternativeName())).append("</td><td>").append(num(p.delayYears(), 3))
+                        .append("</td><td>").append(money(p.presentValueAtStartOfWork().amount(), cur)).append("</td><td>")
+                        .append(money(p.presentValueToday().amount(), cur)).append("</td><td>")
+                        .append(money(p.increaseToday().amount(), cur)).append("</td></tr>");
+            }
+        }
+        h.append("</table></section>\n");
+    }
+
+    private static String money(double amount, String currency) {
+        return esc(String.format(Locale.ROOT, "%,.0f %s", amount, currency));
     }
 
     private static void card(StringBuilder h, String label, String value, String unit) {

@@ -16,7 +16,8 @@ import eluvia.site.model.SolutionMethod;
 
 final class ProgressTest {
 
-    private static final DesignSettings FAST = DesignSettings.builder().pushDownBelowColumn(false).build();
+    private static final DesignSettings FAST = DesignSettings.builder().pushDownBelowColumn(false)
+            .blockPlanSizeMetres(2).blockDepthMetres(0.5).build();
 
     @Test
     void progressRisesToOneThroughTheStages() {

@@ -12,12 +12,15 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import eluvia.cost.LineItem;
+import eluvia.design.AlternativeResult;
 import eluvia.design.Cautions;
 import eluvia.design.DesignPipeline;
 import eluvia.design.DesignRun;
 import eluvia.design.FlushingDesignResult;
 import eluvia.site.files.ExampleProjects;
 import eluvia.site.files.ProjectFiles;
+import eluvia.report.internal.Html;
 import eluvia.site.model.Project;
 
 final class DesignPackageTest {
@@ -52,6 +55,35 @@ final class DesignPackageTest {
             assertTrue(html.contains(r.designName()));
         }
         assertTrue(html.contains("Brenner (1962)"), "methods must name their published source");
+        // the whole job is in the package: zone analysis, enlargement, alternatives with quantities and costs
+        assertTrue(json.contains("\"formatVersion\": " + ResultsJson.FORMAT_VERSION), json.substring(0, 200));
+        for (String key : List.of("\"zoneAnalysis\"", "\"enlargement\"", "\"excavations\"", "\"alternatives\"",
+                "\"costOfDelay\"", "\"governingMethod\"", "\"quantitySource\"", "\"presentValue\"")) {
+            assertTrue(json.contains(key), "results.json lacks " + key);
+        }
+        for (AlternativeResult a : run.alternatives()) {
+            assertTrue(json.contains("\"name\": \"" + a.name() + "\""), a.name());
+            assertTrue(html.contains(Html.esc(a.name())), a.name());
+        }
+        assertTrue(html.contains("Alternatives side by side"));
+        assertTrue(html.contains("Crank (1975)"), "the enlargement must name its published source");
+    }
+
+    @Test
+    void everyCostLineInResultsJsonNamesAQuantityOfItsAlternative() throws Exception {
+        Project project = ExampleProjects.loadRiversideDepot();
+        DesignRun run = DesignPipeline.run(project);
+        String json = ResultsJson.of(run, null, "test");
+        for (AlternativeResult a : run.alternatives()) {
+            if (!a.available()) {
+                continue;
+            }
+            for (LineItem line : a.estimate().lines()) {
+                // the line's quantity is one of the alternative's, with its source written beside it
+                assertTrue(a.quantities().contains(line.quantity().name()));
+                assertTrue(json.contains("\"quantity\": \"" + line.quantity().name() + "\""), line.quantity().name());
+            }
+        }
     }
 
     @Test
