@@ -31,6 +31,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.Project#getExcavationDesigns <em>Excavation Designs</em>}</li>
  *   <li>{@link eluvia.site.model.Project#getPriceBooks <em>Price Books</em>}</li>
  *   <li>{@link eluvia.site.model.Project#getColumnTests <em>Column Tests</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getUncertainty <em>Uncertainty</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getProject()
@@ -270,5 +271,30 @@ public interface Project extends EObject {
 	 * @generated
 	 */
 	EList<ColumnTest> getColumnTests();
+
+	/**
+	 * Returns the value of the '<em><b>Uncertainty</b></em>' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Monte Carlo uncertainty analysis of the headline figures: settings, the uncertain inputs and their rank correlations; none means no uncertain inputs.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Uncertainty</em>' containment reference.
+	 * @see #setUncertainty(UncertaintySettings)
+	 * @see eluvia.site.model.SitePackage#getProject_Uncertainty()
+	 * @model containment="true"
+	 * @generated
+	 */
+	UncertaintySettings getUncertainty();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getUncertainty <em>Uncertainty</em>}' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Uncertainty</em>' containment reference.
+	 * @see #getUncertainty()
+	 * @generated
+	 */
+	void setUncertainty(UncertaintySettings value);
 
 } // Project

@@ -175,6 +175,33 @@ public interface SiteFactory extends EFactory {
 	ColumnTestPoint createColumnTestPoint();
 
 	/**
+	 * Returns a new object of class '<em>Uncertainty Settings</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Uncertainty Settings</em>'.
+	 * @generated
+	 */
+	UncertaintySettings createUncertaintySettings();
+
+	/**
+	 * Returns a new object of class '<em>Uncertain Input</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Uncertain Input</em>'.
+	 * @generated
+	 */
+	UncertainInput createUncertainInput();
+
+	/**
+	 * Returns a new object of class '<em>Rank Correlation</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Rank Correlation</em>'.
+	 * @generated
+	 */
+	RankCorrelation createRankCorrelation();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

@@ -179,13 +179,22 @@ public interface SitePackage extends EPackage {
 	int PROJECT__COLUMN_TESTS = 11;
 
 	/**
+	 * The feature id for the '<em><b>Uncertainty</b></em>' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__UNCERTAINTY = 12;
+
+	/**
 	 * The number of structural features of the '<em>Project</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = 12;
+	int PROJECT_FEATURE_COUNT = 13;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -1734,6 +1743,270 @@ public interface SitePackage extends EPackage {
 	int COLUMN_TEST_POINT_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.UncertaintySettingsImpl <em>Uncertainty Settings</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.UncertaintySettingsImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getUncertaintySettings()
+	 * @generated
+	 */
+	int UNCERTAINTY_SETTINGS = 17;
+
+	/**
+	 * The feature id for the '<em><b>Enabled</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS__ENABLED = 0;
+
+	/**
+	 * The feature id for the '<em><b>Run Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS__RUN_COUNT = 1;
+
+	/**
+	 * The feature id for the '<em><b>Seed</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS__SEED = 2;
+
+	/**
+	 * The feature id for the '<em><b>Sampling Method</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS__SAMPLING_METHOD = 3;
+
+	/**
+	 * The feature id for the '<em><b>Inputs</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS__INPUTS = 4;
+
+	/**
+	 * The feature id for the '<em><b>Rank Correlations</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS__RANK_CORRELATIONS = 5;
+
+	/**
+	 * The number of structural features of the '<em>Uncertainty Settings</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS_FEATURE_COUNT = 6;
+
+	/**
+	 * The number of operations of the '<em>Uncertainty Settings</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAINTY_SETTINGS_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.UncertainInputImpl <em>Uncertain Input</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.UncertainInputImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getUncertainInput()
+	 * @generated
+	 */
+	int UNCERTAIN_INPUT = 18;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__NAME = 0;
+
+	/**
+	 * The feature id for the '<em><b>Target</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__TARGET = 1;
+
+	/**
+	 * The feature id for the '<em><b>Feature Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__FEATURE_NAME = 2;
+
+	/**
+	 * The feature id for the '<em><b>Distribution</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__DISTRIBUTION = 3;
+
+	/**
+	 * The feature id for the '<em><b>Mean In Feature Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__MEAN_IN_FEATURE_UNIT = 4;
+
+	/**
+	 * The feature id for the '<em><b>Standard Deviation In Feature Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__STANDARD_DEVIATION_IN_FEATURE_UNIT = 5;
+
+	/**
+	 * The feature id for the '<em><b>Median In Feature Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__MEDIAN_IN_FEATURE_UNIT = 6;
+
+	/**
+	 * The feature id for the '<em><b>Geometric Standard Deviation</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__GEOMETRIC_STANDARD_DEVIATION = 7;
+
+	/**
+	 * The feature id for the '<em><b>Minimum In Feature Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__MINIMUM_IN_FEATURE_UNIT = 8;
+
+	/**
+	 * The feature id for the '<em><b>Mode In Feature Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__MODE_IN_FEATURE_UNIT = 9;
+
+	/**
+	 * The feature id for the '<em><b>Maximum In Feature Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT__MAXIMUM_IN_FEATURE_UNIT = 10;
+
+	/**
+	 * The number of structural features of the '<em>Uncertain Input</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT_FEATURE_COUNT = 11;
+
+	/**
+	 * The number of operations of the '<em>Uncertain Input</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int UNCERTAIN_INPUT_OPERATION_COUNT = 0;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.RankCorrelationImpl <em>Rank Correlation</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.RankCorrelationImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getRankCorrelation()
+	 * @generated
+	 */
+	int RANK_CORRELATION = 19;
+
+	/**
+	 * The feature id for the '<em><b>First</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RANK_CORRELATION__FIRST = 0;
+
+	/**
+	 * The feature id for the '<em><b>Second</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RANK_CORRELATION__SECOND = 1;
+
+	/**
+	 * The feature id for the '<em><b>Coefficient</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RANK_CORRELATION__COEFFICIENT = 2;
+
+	/**
+	 * The number of structural features of the '<em>Rank Correlation</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RANK_CORRELATION_FEATURE_COUNT = 3;
+
+	/**
+	 * The number of operations of the '<em>Rank Correlation</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RANK_CORRELATION_OPERATION_COUNT = 0;
+
+	/**
 	 * The meta object id for the '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1741,7 +2014,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceCriterion()
 	 * @generated
 	 */
-	int COMPLIANCE_CRITERION = 17;
+	int COMPLIANCE_CRITERION = 20;
 
 
 	/**
@@ -1752,7 +2025,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getUnitSystem()
 	 * @generated
 	 */
-	int UNIT_SYSTEM = 18;
+	int UNIT_SYSTEM = 21;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.DispersivityRule <em>Dispersivity Rule</em>}' enum.
@@ -1762,7 +2035,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getDispersivityRule()
 	 * @generated
 	 */
-	int DISPERSIVITY_RULE = 19;
+	int DISPERSIVITY_RULE = 22;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.SorptionIsotherm <em>Sorption Isotherm</em>}' enum.
@@ -1772,7 +2045,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getSorptionIsotherm()
 	 * @generated
 	 */
-	int SORPTION_ISOTHERM = 20;
+	int SORPTION_ISOTHERM = 23;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.NonequilibriumEntry <em>Nonequilibrium Entry</em>}' enum.
@@ -1782,7 +2055,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getNonequilibriumEntry()
 	 * @generated
 	 */
-	int NONEQUILIBRIUM_ENTRY = 21;
+	int NONEQUILIBRIUM_ENTRY = 24;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.ComplianceStatistic <em>Compliance Statistic</em>}' enum.
@@ -1792,7 +2065,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceStatistic()
 	 * @generated
 	 */
-	int COMPLIANCE_STATISTIC = 22;
+	int COMPLIANCE_STATISTIC = 25;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.SolutionMethod <em>Solution Method</em>}' enum.
@@ -1802,7 +2075,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getSolutionMethod()
 	 * @generated
 	 */
-	int SOLUTION_METHOD = 23;
+	int SOLUTION_METHOD = 26;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.ExcavationSoilType <em>Excavation Soil Type</em>}' enum.
@@ -1812,7 +2085,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getExcavationSoilType()
 	 * @generated
 	 */
-	int EXCAVATION_SOIL_TYPE = 24;
+	int EXCAVATION_SOIL_TYPE = 27;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.ColumnTestKind <em>Column Test Kind</em>}' enum.
@@ -1822,7 +2095,28 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTestKind()
 	 * @generated
 	 */
-	int COLUMN_TEST_KIND = 25;
+	int COLUMN_TEST_KIND = 28;
+
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.UncertaintySampling <em>Uncertainty Sampling</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.UncertaintySampling
+	 * @see eluvia.site.model.impl.SitePackageImpl#getUncertaintySampling()
+	 * @generated
+	 */
+	int UNCERTAINTY_SAMPLING = 29;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.InputDistributionKind <em>Input Distribution Kind</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.InputDistributionKind
+	 * @see eluvia.site.model.impl.SitePackageImpl#getInputDistributionKind()
+	 * @generated
+	 */
+	int INPUT_DISTRIBUTION_KIND = 30;
 
 
 	/**
@@ -1966,6 +2260,17 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getProject_ColumnTests();
+
+	/**
+	 * Returns the meta object for the containment reference '{@link eluvia.site.model.Project#getUncertainty <em>Uncertainty</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference '<em>Uncertainty</em>'.
+	 * @see eluvia.site.model.Project#getUncertainty()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Uncertainty();
 
 	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.Site <em>Site</em>}'.
@@ -3459,6 +3764,256 @@ public interface SitePackage extends EPackage {
 	EAttribute getColumnTestPoint_RelativeConcentration();
 
 	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.UncertaintySettings <em>Uncertainty Settings</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Uncertainty Settings</em>'.
+	 * @see eluvia.site.model.UncertaintySettings
+	 * @generated
+	 */
+	EClass getUncertaintySettings();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertaintySettings#isEnabled <em>Enabled</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Enabled</em>'.
+	 * @see eluvia.site.model.UncertaintySettings#isEnabled()
+	 * @see #getUncertaintySettings()
+	 * @generated
+	 */
+	EAttribute getUncertaintySettings_Enabled();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertaintySettings#getRunCount <em>Run Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Run Count</em>'.
+	 * @see eluvia.site.model.UncertaintySettings#getRunCount()
+	 * @see #getUncertaintySettings()
+	 * @generated
+	 */
+	EAttribute getUncertaintySettings_RunCount();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertaintySettings#getSeed <em>Seed</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Seed</em>'.
+	 * @see eluvia.site.model.UncertaintySettings#getSeed()
+	 * @see #getUncertaintySettings()
+	 * @generated
+	 */
+	EAttribute getUncertaintySettings_Seed();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertaintySettings#getSamplingMethod <em>Sampling Method</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Sampling Method</em>'.
+	 * @see eluvia.site.model.UncertaintySettings#getSamplingMethod()
+	 * @see #getUncertaintySettings()
+	 * @generated
+	 */
+	EAttribute getUncertaintySettings_SamplingMethod();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.UncertaintySettings#getInputs <em>Inputs</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Inputs</em>'.
+	 * @see eluvia.site.model.UncertaintySettings#getInputs()
+	 * @see #getUncertaintySettings()
+	 * @generated
+	 */
+	EReference getUncertaintySettings_Inputs();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link eluvia.site.model.UncertaintySettings#getRankCorrelations <em>Rank Correlations</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Rank Correlations</em>'.
+	 * @see eluvia.site.model.UncertaintySettings#getRankCorrelations()
+	 * @see #getUncertaintySettings()
+	 * @generated
+	 */
+	EReference getUncertaintySettings_RankCorrelations();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.UncertainInput <em>Uncertain Input</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Uncertain Input</em>'.
+	 * @see eluvia.site.model.UncertainInput
+	 * @generated
+	 */
+	EClass getUncertainInput();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see eluvia.site.model.UncertainInput#getName()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_Name();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.UncertainInput#getTarget <em>Target</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Target</em>'.
+	 * @see eluvia.site.model.UncertainInput#getTarget()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EReference getUncertainInput_Target();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getFeatureName <em>Feature Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Feature Name</em>'.
+	 * @see eluvia.site.model.UncertainInput#getFeatureName()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_FeatureName();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getDistribution <em>Distribution</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Distribution</em>'.
+	 * @see eluvia.site.model.UncertainInput#getDistribution()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_Distribution();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getMeanInFeatureUnit <em>Mean In Feature Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Mean In Feature Unit</em>'.
+	 * @see eluvia.site.model.UncertainInput#getMeanInFeatureUnit()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_MeanInFeatureUnit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getStandardDeviationInFeatureUnit <em>Standard Deviation In Feature Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Standard Deviation In Feature Unit</em>'.
+	 * @see eluvia.site.model.UncertainInput#getStandardDeviationInFeatureUnit()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_StandardDeviationInFeatureUnit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getMedianInFeatureUnit <em>Median In Feature Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Median In Feature Unit</em>'.
+	 * @see eluvia.site.model.UncertainInput#getMedianInFeatureUnit()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_MedianInFeatureUnit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getGeometricStandardDeviation <em>Geometric Standard Deviation</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Geometric Standard Deviation</em>'.
+	 * @see eluvia.site.model.UncertainInput#getGeometricStandardDeviation()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_GeometricStandardDeviation();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getMinimumInFeatureUnit <em>Minimum In Feature Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Minimum In Feature Unit</em>'.
+	 * @see eluvia.site.model.UncertainInput#getMinimumInFeatureUnit()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_MinimumInFeatureUnit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getModeInFeatureUnit <em>Mode In Feature Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Mode In Feature Unit</em>'.
+	 * @see eluvia.site.model.UncertainInput#getModeInFeatureUnit()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_ModeInFeatureUnit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.UncertainInput#getMaximumInFeatureUnit <em>Maximum In Feature Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Maximum In Feature Unit</em>'.
+	 * @see eluvia.site.model.UncertainInput#getMaximumInFeatureUnit()
+	 * @see #getUncertainInput()
+	 * @generated
+	 */
+	EAttribute getUncertainInput_MaximumInFeatureUnit();
+
+	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.RankCorrelation <em>Rank Correlation</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Rank Correlation</em>'.
+	 * @see eluvia.site.model.RankCorrelation
+	 * @generated
+	 */
+	EClass getRankCorrelation();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.RankCorrelation#getFirst <em>First</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>First</em>'.
+	 * @see eluvia.site.model.RankCorrelation#getFirst()
+	 * @see #getRankCorrelation()
+	 * @generated
+	 */
+	EReference getRankCorrelation_First();
+
+	/**
+	 * Returns the meta object for the reference '{@link eluvia.site.model.RankCorrelation#getSecond <em>Second</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Second</em>'.
+	 * @see eluvia.site.model.RankCorrelation#getSecond()
+	 * @see #getRankCorrelation()
+	 * @generated
+	 */
+	EReference getRankCorrelation_Second();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.RankCorrelation#getCoefficient <em>Coefficient</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Coefficient</em>'.
+	 * @see eluvia.site.model.RankCorrelation#getCoefficient()
+	 * @see #getRankCorrelation()
+	 * @generated
+	 */
+	EAttribute getRankCorrelation_Coefficient();
+
+	/**
 	 * Returns the meta object for enum '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -3547,6 +4102,26 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EEnum getColumnTestKind();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.UncertaintySampling <em>Uncertainty Sampling</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Uncertainty Sampling</em>'.
+	 * @see eluvia.site.model.UncertaintySampling
+	 * @generated
+	 */
+	EEnum getUncertaintySampling();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.InputDistributionKind <em>Input Distribution Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Input Distribution Kind</em>'.
+	 * @see eluvia.site.model.InputDistributionKind
+	 * @generated
+	 */
+	EEnum getInputDistributionKind();
 
 	/**
 	 * Returns the factory that creates the instances of the model.
@@ -3676,6 +4251,14 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EReference PROJECT__COLUMN_TESTS = eINSTANCE.getProject_ColumnTests();
+
+		/**
+		 * The meta object literal for the '<em><b>Uncertainty</b></em>' containment reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__UNCERTAINTY = eINSTANCE.getProject_Uncertainty();
 
 		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.SiteImpl <em>Site</em>}' class.
@@ -4806,6 +5389,196 @@ public interface SitePackage extends EPackage {
 		EAttribute COLUMN_TEST_POINT__RELATIVE_CONCENTRATION = eINSTANCE.getColumnTestPoint_RelativeConcentration();
 
 		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.UncertaintySettingsImpl <em>Uncertainty Settings</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.UncertaintySettingsImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getUncertaintySettings()
+		 * @generated
+		 */
+		EClass UNCERTAINTY_SETTINGS = eINSTANCE.getUncertaintySettings();
+
+		/**
+		 * The meta object literal for the '<em><b>Enabled</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAINTY_SETTINGS__ENABLED = eINSTANCE.getUncertaintySettings_Enabled();
+
+		/**
+		 * The meta object literal for the '<em><b>Run Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAINTY_SETTINGS__RUN_COUNT = eINSTANCE.getUncertaintySettings_RunCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Seed</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAINTY_SETTINGS__SEED = eINSTANCE.getUncertaintySettings_Seed();
+
+		/**
+		 * The meta object literal for the '<em><b>Sampling Method</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAINTY_SETTINGS__SAMPLING_METHOD = eINSTANCE.getUncertaintySettings_SamplingMethod();
+
+		/**
+		 * The meta object literal for the '<em><b>Inputs</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference UNCERTAINTY_SETTINGS__INPUTS = eINSTANCE.getUncertaintySettings_Inputs();
+
+		/**
+		 * The meta object literal for the '<em><b>Rank Correlations</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference UNCERTAINTY_SETTINGS__RANK_CORRELATIONS = eINSTANCE.getUncertaintySettings_RankCorrelations();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.UncertainInputImpl <em>Uncertain Input</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.UncertainInputImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getUncertainInput()
+		 * @generated
+		 */
+		EClass UNCERTAIN_INPUT = eINSTANCE.getUncertainInput();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__NAME = eINSTANCE.getUncertainInput_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Target</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference UNCERTAIN_INPUT__TARGET = eINSTANCE.getUncertainInput_Target();
+
+		/**
+		 * The meta object literal for the '<em><b>Feature Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__FEATURE_NAME = eINSTANCE.getUncertainInput_FeatureName();
+
+		/**
+		 * The meta object literal for the '<em><b>Distribution</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__DISTRIBUTION = eINSTANCE.getUncertainInput_Distribution();
+
+		/**
+		 * The meta object literal for the '<em><b>Mean In Feature Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__MEAN_IN_FEATURE_UNIT = eINSTANCE.getUncertainInput_MeanInFeatureUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Standard Deviation In Feature Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__STANDARD_DEVIATION_IN_FEATURE_UNIT = eINSTANCE.getUncertainInput_StandardDeviationInFeatureUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Median In Feature Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__MEDIAN_IN_FEATURE_UNIT = eINSTANCE.getUncertainInput_MedianInFeatureUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Geometric Standard Deviation</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__GEOMETRIC_STANDARD_DEVIATION = eINSTANCE.getUncertainInput_GeometricStandardDeviation();
+
+		/**
+		 * The meta object literal for the '<em><b>Minimum In Feature Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__MINIMUM_IN_FEATURE_UNIT = eINSTANCE.getUncertainInput_MinimumInFeatureUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Mode In Feature Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__MODE_IN_FEATURE_UNIT = eINSTANCE.getUncertainInput_ModeInFeatureUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Maximum In Feature Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute UNCERTAIN_INPUT__MAXIMUM_IN_FEATURE_UNIT = eINSTANCE.getUncertainInput_MaximumInFeatureUnit();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.RankCorrelationImpl <em>Rank Correlation</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.RankCorrelationImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getRankCorrelation()
+		 * @generated
+		 */
+		EClass RANK_CORRELATION = eINSTANCE.getRankCorrelation();
+
+		/**
+		 * The meta object literal for the '<em><b>First</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference RANK_CORRELATION__FIRST = eINSTANCE.getRankCorrelation_First();
+
+		/**
+		 * The meta object literal for the '<em><b>Second</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference RANK_CORRELATION__SECOND = eINSTANCE.getRankCorrelation_Second();
+
+		/**
+		 * The meta object literal for the '<em><b>Coefficient</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RANK_CORRELATION__COEFFICIENT = eINSTANCE.getRankCorrelation_Coefficient();
+
+		/**
 		 * The meta object literal for the '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}' enum.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -4894,6 +5667,26 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EEnum COLUMN_TEST_KIND = eINSTANCE.getColumnTestKind();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.UncertaintySampling <em>Uncertainty Sampling</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.UncertaintySampling
+		 * @see eluvia.site.model.impl.SitePackageImpl#getUncertaintySampling()
+		 * @generated
+		 */
+		EEnum UNCERTAINTY_SAMPLING = eINSTANCE.getUncertaintySampling();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.InputDistributionKind <em>Input Distribution Kind</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.InputDistributionKind
+		 * @see eluvia.site.model.impl.SitePackageImpl#getInputDistributionKind()
+		 * @generated
+		 */
+		EEnum INPUT_DISTRIBUTION_KIND = eINSTANCE.getInputDistributionKind();
 
 	}
 

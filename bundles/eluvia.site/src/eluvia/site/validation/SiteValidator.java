@@ -7,7 +7,9 @@ import java.util.Locale;
 import java.util.Objects;
 import java.util.Set;
 
+import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 
 import eluvia.site.files.ProjectFiles;
@@ -36,6 +38,10 @@ import eluvia.site.model.Site;
 import eluvia.site.model.SoilLayer;
 import eluvia.site.model.SourceConcentration;
 import eluvia.site.model.TreatmentZone;
+import eluvia.site.model.InputDistributionKind;
+import eluvia.site.model.RankCorrelation;
+import eluvia.site.model.UncertainInput;
+import eluvia.site.model.UncertaintySettings;
 
 /**
  * Checks every field of a project: ranges, required values and consistency between fields
@@ -118,6 +124,9 @@ public final class SiteValidator {
         }
         for (int i = 0; i < project.getRevisions().size(); i++) {
             revision(project.getRevisions().get(i), i);
+        }
+        if (project.getUncertainty() != null) {
+            uncertainty(project, project.getUncertainty());
         }
     }
 
@@ -825,6 +834,173 @@ public final class SiteValidator {
         if (revision.getSummary() == null || revision.getSummary().isBlank()) {
             warning(revision, label, "summary", "(empty)", "not empty", "say what changed");
         }
+    }
+
+    // ---- uncertainty ---------------------------------------------------------------------------
+
+    /** The fewest Monte Carlo runs (as eluvia.design's simulation settings). */
+    static final int MIN_UNCERTAINTY_RUNS = 2;
+    /** The most Monte Carlo runs (as eluvia.design's simulation settings). */
+    static final int MAX_UNCERTAINTY_RUNS = 10_000_000;
+
+    private void uncertainty(Project project, UncertaintySettings settings) {
+        String label = "Uncertainty settings";
+        int runs = settings.getRunCount();
+        if (runs < MIN_UNCERTAINTY_RUNS || runs > MAX_UNCERTAINTY_RUNS) {
+            error(settings, label, "runCount", Integer.toString(runs), MIN_UNCERTAINTY_RUNS + " to " + MAX_UNCERTAINTY_RUNS,
+                    "enter the number of Monte Carlo runs; 1,000 to 10,000 is usual");
+        }
+        if (settings.isEnabled() && settings.getInputs().isEmpty()) {
+            warning(settings, label, "enabled", "true", "true only with at least one uncertain input",
+                    "add the uncertain inputs, or switch the uncertainty analysis off");
+        }
+        Set<String> names = new HashSet<>();
+        Set<String> varied = new HashSet<>();
+        for (int i = 0; i < settings.getInputs().size(); i++) {
+            UncertainInput input = settings.getInputs().get(i);
+            String inputLabel = label("Uncertain input", input.getName(), i);
+            String key = key(input.getName());
+            if (!key.isEmpty() && !names.add(key)) {
+                error(input, inputLabel, "name", quote(input.getName()), "a name no other uncertain input has",
+                        "rename one of the inputs so that results can be told apart");
+            }
+            EObject target = input.getTarget();
+            boolean targetOk = false;
+            if (target == null) {
+                error(input, inputLabel, "target", "(none)", "an object of this project",
+                        "choose the object whose value is uncertain, e.g. a soil layer or a flushing design");
+            } else if (!EcoreUtil.isAncestor(project, target)) {
+                error(input, inputLabel, "target", target.eClass().getName(), "an object of this project",
+                        "choose an object of this project; the one chosen was removed or belongs to another project");
+            } else {
+                targetOk = true;
+            }
+            if (targetOk && uncertainFeature(input, inputLabel, target)
+                    && !varied.add(EcoreUtil.getURI(target).fragment() + "#" + input.getFeatureName())) {
+                error(input, inputLabel, "featureName", quote(input.getFeatureName()),
+                        "a value no other uncertain input varies on the same object", "remove the duplicate input");
+            }
+            distribution(input, inputLabel);
+        }
+        Set<String> pairs = new HashSet<>();
+        for (int i = 0; i < settings.getRankCorrelations().size(); i++) {
+            RankCorrelation correlation = settings.getRankCorrelations().get(i);
+            String correlationLabel = "Rank correlation " + (i + 1);
+            UncertainInput first = correlation.getFirst();
+            UncertainInput second = correlation.getSecond();
+            boolean firstOk = correlated(settings, correlation, correlationLabel, "first", first);
+            boolean secondOk = correlated(settings, correlation, correlationLabel, "second", second);
+            if (firstOk && secondOk) {
+                int a = settings.getInputs().indexOf(first);
+                int b = settings.getInputs().indexOf(second);
+                if (a == b) {
+                    error(correlation, correlationLabel, "second", "input " + (b + 1), "an input other than the first",
+                            "a value is always fully correlated with itself; choose two different inputs");
+                } else if (!pairs.add(Math.min(a, b) + "-" + Math.max(a, b))) {
+                    error(correlation, correlationLabel, "second", "input " + (b + 1),
+                            "a pair no other rank correlation names", "remove the duplicate correlation");
+                }
+            }
+            double r = correlation.getCoefficient();
+            if (!(finite(r) && r > -1 && r < 1)) {
+                error(correlation, correlationLabel, "coefficient", num(r), "(-1, 1) (dimensionless)",
+                        "enter the Spearman rank correlation, e.g. -0.5; exactly -1 or 1 would make the two inputs one");
+            }
+        }
+    }
+
+    /** Checks that the input's feature is a changeable, single-valued double attribute of its target. */
+    private boolean uncertainFeature(UncertainInput input, String label, EObject target) {
+        String name = input.getFeatureName();
+        if (name == null || name.isBlank()) {
+            error(input, label, "featureName", "(empty)", "the name of a number of the target",
+                    "enter the name of the value that varies, e.g. " + exampleFeatures(target));
+            return false;
+        }
+        EStructuralFeature feature = target.eClass().getEStructuralFeature(name);
+        if (!(feature instanceof EAttribute attribute)) {
+            error(input, label, "featureName", quote(name), "a number of a " + target.eClass().getName() + ": "
+                    + exampleFeatures(target), "choose one of the listed names (spelled as shown)");
+            return false;
+        }
+        Class<?> type = attribute.getEAttributeType().getInstanceClass();
+        if (type != double.class && type != Double.class || attribute.isMany()) {
+            error(input, label, "featureName", quote(name), "a number of a " + target.eClass().getName() + ": "
+                    + exampleFeatures(target), "'" + name + "' is not a single number; choose one of the listed names");
+            return false;
+        }
+        if (!attribute.isChangeable() || attribute.isDerived()) {
+            error(input, label, "featureName", quote(name), "a value that is entered, not derived: "
+                    + exampleFeatures(target), "'" + name + "' is computed from other values; make those uncertain instead");
+            return false;
+        }
+        return true;
+    }
+
+    /** The changeable double attributes of the target's class, for messages. */
+    private static String exampleFeatures(EObject target) {
+        List<String> names = new ArrayList<>();
+        for (EAttribute attribute : target.eClass().getEAllAttributes()) {
+            Class<?> type = attribute.getEAttributeType().getInstanceClass();
+            if ((type == double.class || type == Double.class) && !attribute.isMany() && attribute.isChangeable()
+                    && !attribute.isDerived()) {
+                names.add(attribute.getName());
+            }
+        }
+        return names.isEmpty() ? "(this object has no numbers that can vary)" : String.join(", ", names);
+    }
+
+    private void distribution(UncertainInput input, String label) {
+        switch (input.getDistribution()) {
+        case NORMAL -> {
+            if (!finite(input.getMeanInFeatureUnit())) {
+                error(input, label, "meanInFeatureUnit", num(input.getMeanInFeatureUnit()), "a finite number in the feature's unit",
+                        "enter the mean of the normal distribution");
+            }
+            positive(input, label, "standardDeviationInFeatureUnit", input.getStandardDeviationInFeatureUnit(),
+                    "in the feature's unit", "enter the standard deviation of the normal distribution");
+        }
+        case LOGNORMAL -> {
+            positive(input, label, "medianInFeatureUnit", input.getMedianInFeatureUnit(), "in the feature's unit",
+                    "enter the median of the lognormal distribution (a lognormal value is always positive)");
+            double gsd = input.getGeometricStandardDeviation();
+            if (!(finite(gsd) && gsd > 1)) {
+                error(input, label, "geometricStandardDeviation", num(gsd), "greater than 1 (dimensionless)",
+                        "enter exp(standard deviation of ln x), e.g. 2 for a factor-of-two spread");
+            }
+        }
+        case UNIFORM, TRIANGULAR -> {
+            double min = input.getMinimumInFeatureUnit();
+            double max = input.getMaximumInFeatureUnit();
+            if (!finite(min)) {
+                error(input, label, "minimumInFeatureUnit", num(min), "a finite number in the feature's unit",
+                        "enter the smallest value");
+            } else if (!(finite(max) && max > min)) {
+                error(input, label, "maximumInFeatureUnit", num(max), "greater than the minimum " + num(min),
+                        "enter the largest value, above the minimum");
+            } else if (input.getDistribution() == InputDistributionKind.TRIANGULAR) {
+                double mode = input.getModeInFeatureUnit();
+                if (!(finite(mode) && mode >= min && mode <= max)) {
+                    error(input, label, "modeInFeatureUnit", num(mode), "[" + num(min) + ", " + num(max) + "] (minimum to maximum)",
+                            "enter the most likely value, between the minimum and the maximum");
+                }
+            }
+        }
+        }
+    }
+
+    private boolean correlated(UncertaintySettings settings, RankCorrelation correlation, String label, String field,
+            UncertainInput input) {
+        if (input == null) {
+            error(correlation, label, field, "(none)", "an uncertain input of this project", "choose the input");
+            return false;
+        }
+        if (!settings.getInputs().contains(input)) {
+            error(correlation, label, field, quote(input.getName()), "an uncertain input of this project",
+                    "choose one of this project's uncertain inputs");
+            return false;
+        }
+        return true;
     }
 
     // ---- helpers -----------------------------------------------------------------------------------

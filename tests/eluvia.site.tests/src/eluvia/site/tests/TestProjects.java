@@ -97,6 +97,9 @@ public final class TestProjects {
         if (instanceClass == int.class || instanceClass == Integer.class) {
             return 1000 + counter;
         }
+        if (instanceClass == long.class || instanceClass == Long.class) {
+            return 5_000_000_000L + counter;
+        }
         if (instanceClass == boolean.class || instanceClass == Boolean.class) {
             return !Boolean.TRUE.equals(attribute.getDefaultValue());
         }

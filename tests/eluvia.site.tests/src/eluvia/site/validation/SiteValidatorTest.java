@@ -42,6 +42,9 @@ import eluvia.site.model.SitePackage;
 import eluvia.site.model.SoilLayer;
 import eluvia.site.model.SourceConcentration;
 import eluvia.site.model.TreatmentZone;
+import eluvia.site.model.RankCorrelation;
+import eluvia.site.model.UncertainInput;
+import eluvia.site.model.UncertaintySettings;
 import eluvia.site.tests.TestProjects;
 
 /**
@@ -98,6 +101,18 @@ final class SiteValidatorTest {
 
     private static SourceConcentration source(Project p, int i) {
         return zone(p).getSourceConcentrations().get(i);
+    }
+
+    private static UncertaintySettings uncertainty(Project p) {
+        return p.getUncertainty();
+    }
+
+    private static UncertainInput uncertain(Project p, int i) {
+        return uncertainty(p).getInputs().get(i);
+    }
+
+    private static RankCorrelation correlation(Project p, int i) {
+        return uncertainty(p).getRankCorrelations().get(i);
     }
 
     private static Arguments error(String what, Consumer<Project> change, Function<Project, EObject> object,
@@ -355,7 +370,56 @@ final class SiteValidatorTest {
                 warning("revision without time", p -> p.getRevisions().get(0).setTimestamp(null), p -> p.getRevisions().get(0), "timestamp", "(none)",
                         "a date and time"),
                 warning("revision without summary", p -> p.getRevisions().get(0).setSummary(null), p -> p.getRevisions().get(0), "summary", "(empty)",
-                        "not empty"));
+                        "not empty"),
+                // Uncertainty (ranges: what a distribution needs to be defined, and the Monte Carlo engine's limits)
+                error("too few Monte Carlo runs", p -> uncertainty(p).setRunCount(1), p -> uncertainty(p), "runCount", "1", "2 to 10000000"),
+                warning("uncertainty on without inputs", p -> { uncertainty(p).getRankCorrelations().clear(); uncertainty(p).getInputs().clear(); },
+                        p -> uncertainty(p), "enabled", "true", "at least one uncertain input"),
+                error("duplicate uncertain input names", p -> uncertain(p, 1).setName(uncertain(p, 0).getName().toUpperCase()),
+                        p -> uncertain(p, 1), "name", "'" + TestProjects.example().getUncertainty().getInputs().get(0).getName().toUpperCase() + "'",
+                        "a name no other uncertain input has"),
+                error("uncertain input without target", p -> uncertain(p, 0).setTarget(null), p -> uncertain(p, 0), "target", "(none)",
+                        "an object of this project"),
+                error("uncertain input on a foreign object", p -> uncertain(p, 0).setTarget(SiteFactory.eINSTANCE.createSoilLayer()),
+                        p -> uncertain(p, 0), "target", "SoilLayer", "an object of this project"),
+                error("uncertain input without feature", p -> uncertain(p, 0).setFeatureName(""), p -> uncertain(p, 0), "featureName", "(empty)",
+                        "the name of a number of the target"),
+                error("uncertain input on a feature the target lacks", p -> uncertain(p, 0).setFeatureName("colour"), p -> uncertain(p, 0),
+                        "featureName", "'colour'", "a number of a SoilLayer: "),
+                error("uncertain input on a text feature", p -> uncertain(p, 0).setFeatureName("name"), p -> uncertain(p, 0),
+                        "featureName", "'name'", "porosity"),
+                error("uncertain input on a derived feature", p -> uncertain(p, 0).setFeatureName("effectiveDispersivityMetres"),
+                        p -> uncertain(p, 0), "featureName", "'effectiveDispersivityMetres'", "a value that is entered, not derived"),
+                error("two uncertain inputs on one value", p -> { uncertain(p, 1).setTarget(layer(p, 1)); uncertain(p, 1).setFeatureName("porosity"); },
+                        p -> uncertain(p, 1), "featureName", "'porosity'", "a value no other uncertain input varies on the same object"),
+                error("normal mean not a number", p -> uncertain(p, 4).setMeanInFeatureUnit(Double.NaN), p -> uncertain(p, 4),
+                        "meanInFeatureUnit", "NaN", "a finite number"),
+                error("normal standard deviation zero", p -> uncertain(p, 4).setStandardDeviationInFeatureUnit(0), p -> uncertain(p, 4),
+                        "standardDeviationInFeatureUnit", "0", "greater than 0"),
+                error("lognormal median zero", p -> uncertain(p, 1).setMedianInFeatureUnit(0), p -> uncertain(p, 1),
+                        "medianInFeatureUnit", "0", "greater than 0"),
+                error("lognormal geometric standard deviation one", p -> uncertain(p, 1).setGeometricStandardDeviation(1), p -> uncertain(p, 1),
+                        "geometricStandardDeviation", "1", "greater than 1"),
+                error("uniform minimum infinite", p -> uncertain(p, 2).setMinimumInFeatureUnit(Double.NEGATIVE_INFINITY), p -> uncertain(p, 2),
+                        "minimumInFeatureUnit", "-Infinity", "a finite number"),
+                error("uniform maximum below minimum", p -> uncertain(p, 2).setMaximumInFeatureUnit(0.1), p -> uncertain(p, 2),
+                        "maximumInFeatureUnit", "0.1", "greater than the minimum 0.15"),
+                error("triangular mode above maximum", p -> uncertain(p, 0).setModeInFeatureUnit(0.5), p -> uncertain(p, 0),
+                        "modeInFeatureUnit", "0.5", "[0.34, 0.42]"),
+                error("rank correlation without first input", p -> correlation(p, 0).setFirst(null), p -> correlation(p, 0), "first", "(none)",
+                        "an uncertain input of this project"),
+                error("rank correlation with a foreign input", p -> correlation(p, 0).setSecond(SiteFactory.eINSTANCE.createUncertainInput()),
+                        p -> correlation(p, 0), "second", "''", "an uncertain input of this project"),
+                error("rank correlation of an input with itself", p -> correlation(p, 0).setSecond(uncertain(p, 0)), p -> correlation(p, 0),
+                        "second", "input 1", "an input other than the first"),
+                error("rank correlation given twice", p -> {
+                    RankCorrelation twice = SiteFactory.eINSTANCE.createRankCorrelation();
+                    twice.setFirst(uncertain(p, 2));
+                    twice.setSecond(uncertain(p, 0));
+                    twice.setCoefficient(0.2);
+                    uncertainty(p).getRankCorrelations().add(twice);
+                }, p -> correlation(p, 1), "second", "input 1", "a pair no other rank correlation names"),
+                error("rank correlation of one", p -> correlation(p, 0).setCoefficient(1), p -> correlation(p, 0), "coefficient", "1", "(-1, 1)"));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -386,7 +450,8 @@ final class SiteValidatorTest {
     private static final Set<String> FREE_FIELDS = Set.of("Project.description", "Project.unitSystem", "Site.description",
             "Contaminant.kdEntered", "CleanupLevel.statistic", "CleanupLevel.porewaterLevelEntered", "SoilLayer.dispersivityRule",
             "FlushingDesign.criterion", "ExcavationDesign.soilType", "Sample.nonDetect", "ColumnTest.kind",
-            "Contaminant.isotherm", "Contaminant.nonequilibrium");
+            "Contaminant.isotherm", "Contaminant.nonequilibrium",
+            "UncertaintySettings.seed", "UncertaintySettings.samplingMethod", "UncertainInput.distribution");
 
     @Test
     void everyFieldHasARuleTestedHereOrTakesAnyValue() {

@@ -179,6 +179,7 @@ public class ProjectItemProvider
 			childrenFeatures.add(SitePackage.Literals.PROJECT__EXCAVATION_DESIGNS);
 			childrenFeatures.add(SitePackage.Literals.PROJECT__PRICE_BOOKS);
 			childrenFeatures.add(SitePackage.Literals.PROJECT__COLUMN_TESTS);
+			childrenFeatures.add(SitePackage.Literals.PROJECT__UNCERTAINTY);
 		}
 		return childrenFeatures;
 	}
@@ -248,6 +249,7 @@ public class ProjectItemProvider
 			case SitePackage.PROJECT__EXCAVATION_DESIGNS:
 			case SitePackage.PROJECT__PRICE_BOOKS:
 			case SitePackage.PROJECT__COLUMN_TESTS:
+			case SitePackage.PROJECT__UNCERTAINTY:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
 		}
@@ -304,6 +306,11 @@ public class ProjectItemProvider
 			(createChildParameter
 				(SitePackage.Literals.PROJECT__COLUMN_TESTS,
 				 SiteFactory.eINSTANCE.createColumnTest()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(SitePackage.Literals.PROJECT__UNCERTAINTY,
+				 SiteFactory.eINSTANCE.createUncertaintySettings()));
 	}
 
 	/**

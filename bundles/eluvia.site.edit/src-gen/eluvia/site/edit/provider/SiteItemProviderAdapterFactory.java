@@ -463,6 +463,75 @@ public class SiteItemProviderAdapterFactory extends SiteAdapterFactory implement
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link eluvia.site.model.UncertaintySettings} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected UncertaintySettingsItemProvider uncertaintySettingsItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link eluvia.site.model.UncertaintySettings}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createUncertaintySettingsAdapter() {
+		if (uncertaintySettingsItemProvider == null) {
+			uncertaintySettingsItemProvider = new UncertaintySettingsItemProvider(this);
+		}
+
+		return uncertaintySettingsItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link eluvia.site.model.UncertainInput} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected UncertainInputItemProvider uncertainInputItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link eluvia.site.model.UncertainInput}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createUncertainInputAdapter() {
+		if (uncertainInputItemProvider == null) {
+			uncertainInputItemProvider = new UncertainInputItemProvider(this);
+		}
+
+		return uncertainInputItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link eluvia.site.model.RankCorrelation} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected RankCorrelationItemProvider rankCorrelationItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link eluvia.site.model.RankCorrelation}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createRankCorrelationAdapter() {
+		if (rankCorrelationItemProvider == null) {
+			rankCorrelationItemProvider = new RankCorrelationItemProvider(this);
+		}
+
+		return rankCorrelationItemProvider;
+	}
+
+	/**
 	 * This returns the root adapter factory that contains this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -584,6 +653,9 @@ public class SiteItemProviderAdapterFactory extends SiteAdapterFactory implement
 		if (priceItemItemProvider != null) priceItemItemProvider.dispose();
 		if (columnTestItemProvider != null) columnTestItemProvider.dispose();
 		if (columnTestPointItemProvider != null) columnTestPointItemProvider.dispose();
+		if (uncertaintySettingsItemProvider != null) uncertaintySettingsItemProvider.dispose();
+		if (uncertainInputItemProvider != null) uncertainInputItemProvider.dispose();
+		if (rankCorrelationItemProvider != null) rankCorrelationItemProvider.dispose();
 	}
 
 }

@@ -13,6 +13,7 @@ import eluvia.site.model.Revision;
 import eluvia.site.model.Site;
 import eluvia.site.model.SitePackage;
 
+import eluvia.site.model.UncertaintySettings;
 import eluvia.site.model.UnitSystem;
 import java.util.Collection;
 
@@ -50,6 +51,7 @@ import org.eclipse.emf.ecore.util.InternalEList;
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getExcavationDesigns <em>Excavation Designs</em>}</li>
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getPriceBooks <em>Price Books</em>}</li>
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getColumnTests <em>Column Tests</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getUncertainty <em>Uncertainty</em>}</li>
  * </ul>
  *
  * @generated
@@ -214,6 +216,16 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 	 * @ordered
 	 */
 	protected EList<ColumnTest> columnTests;
+
+	/**
+	 * The cached value of the '{@link #getUncertainty() <em>Uncertainty</em>}' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getUncertainty()
+	 * @generated
+	 * @ordered
+	 */
+	protected UncertaintySettings uncertainty;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -468,6 +480,51 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 	 * @generated
 	 */
 	@Override
+	public UncertaintySettings getUncertainty() {
+		return uncertainty;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public NotificationChain basicSetUncertainty(UncertaintySettings newUncertainty, NotificationChain msgs) {
+		UncertaintySettings oldUncertainty = uncertainty;
+		uncertainty = newUncertainty;
+		if (eNotificationRequired()) {
+			ENotificationImpl notification = new ENotificationImpl(this, Notification.SET, SitePackage.PROJECT__UNCERTAINTY, oldUncertainty, newUncertainty);
+			if (msgs == null) msgs = notification; else msgs.add(notification);
+		}
+		return msgs;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setUncertainty(UncertaintySettings newUncertainty) {
+		if (newUncertainty != uncertainty) {
+			NotificationChain msgs = null;
+			if (uncertainty != null)
+				msgs = ((InternalEObject)uncertainty).eInverseRemove(this, EOPPOSITE_FEATURE_BASE - SitePackage.PROJECT__UNCERTAINTY, null, msgs);
+			if (newUncertainty != null)
+				msgs = ((InternalEObject)newUncertainty).eInverseAdd(this, EOPPOSITE_FEATURE_BASE - SitePackage.PROJECT__UNCERTAINTY, null, msgs);
+			msgs = basicSetUncertainty(newUncertainty, msgs);
+			if (msgs != null) msgs.dispatch();
+		}
+		else if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.PROJECT__UNCERTAINTY, newUncertainty, newUncertainty));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case SitePackage.PROJECT__SITE:
@@ -486,6 +543,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return ((InternalEList<?>)getPriceBooks()).basicRemove(otherEnd, msgs);
 			case SitePackage.PROJECT__COLUMN_TESTS:
 				return ((InternalEList<?>)getColumnTests()).basicRemove(otherEnd, msgs);
+			case SitePackage.PROJECT__UNCERTAINTY:
+				return basicSetUncertainty(null, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -522,6 +581,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return getPriceBooks();
 			case SitePackage.PROJECT__COLUMN_TESTS:
 				return getColumnTests();
+			case SitePackage.PROJECT__UNCERTAINTY:
+				return getUncertainty();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -578,6 +639,9 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				getColumnTests().clear();
 				getColumnTests().addAll((Collection<? extends ColumnTest>)newValue);
 				return;
+			case SitePackage.PROJECT__UNCERTAINTY:
+				setUncertainty((UncertaintySettings)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -626,6 +690,9 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 			case SitePackage.PROJECT__COLUMN_TESTS:
 				getColumnTests().clear();
 				return;
+			case SitePackage.PROJECT__UNCERTAINTY:
+				setUncertainty((UncertaintySettings)null);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -662,6 +729,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return priceBooks != null && !priceBooks.isEmpty();
 			case SitePackage.PROJECT__COLUMN_TESTS:
 				return columnTests != null && !columnTests.isEmpty();
+			case SitePackage.PROJECT__UNCERTAINTY:
+				return uncertainty != null;
 		}
 		return super.eIsSet(featureID);
 	}

@@ -74,6 +74,9 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 			case SitePackage.PRICE_ITEM: return createPriceItem();
 			case SitePackage.COLUMN_TEST: return createColumnTest();
 			case SitePackage.COLUMN_TEST_POINT: return createColumnTestPoint();
+			case SitePackage.UNCERTAINTY_SETTINGS: return createUncertaintySettings();
+			case SitePackage.UNCERTAIN_INPUT: return createUncertainInput();
+			case SitePackage.RANK_CORRELATION: return createRankCorrelation();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -105,6 +108,10 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 				return createExcavationSoilTypeFromString(eDataType, initialValue);
 			case SitePackage.COLUMN_TEST_KIND:
 				return createColumnTestKindFromString(eDataType, initialValue);
+			case SitePackage.UNCERTAINTY_SAMPLING:
+				return createUncertaintySamplingFromString(eDataType, initialValue);
+			case SitePackage.INPUT_DISTRIBUTION_KIND:
+				return createInputDistributionKindFromString(eDataType, initialValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
 		}
@@ -136,6 +143,10 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 				return convertExcavationSoilTypeToString(eDataType, instanceValue);
 			case SitePackage.COLUMN_TEST_KIND:
 				return convertColumnTestKindToString(eDataType, instanceValue);
+			case SitePackage.UNCERTAINTY_SAMPLING:
+				return convertUncertaintySamplingToString(eDataType, instanceValue);
+			case SitePackage.INPUT_DISTRIBUTION_KIND:
+				return convertInputDistributionKindToString(eDataType, instanceValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
 		}
@@ -333,6 +344,39 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@Override
+	public UncertaintySettings createUncertaintySettings() {
+		UncertaintySettingsImpl uncertaintySettings = new UncertaintySettingsImpl();
+		return uncertaintySettings;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public UncertainInput createUncertainInput() {
+		UncertainInputImpl uncertainInput = new UncertainInputImpl();
+		return uncertainInput;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public RankCorrelation createRankCorrelation() {
+		RankCorrelationImpl rankCorrelation = new RankCorrelationImpl();
+		return rankCorrelation;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	public ComplianceCriterion createComplianceCriterionFromString(EDataType eDataType, String initialValue) {
 		ComplianceCriterion result = ComplianceCriterion.get(initialValue);
 		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
@@ -505,6 +549,46 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 	 * @generated
 	 */
 	public String convertColumnTestKindToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public UncertaintySampling createUncertaintySamplingFromString(EDataType eDataType, String initialValue) {
+		UncertaintySampling result = UncertaintySampling.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertUncertaintySamplingToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public InputDistributionKind createInputDistributionKindFromString(EDataType eDataType, String initialValue) {
+		InputDistributionKind result = InputDistributionKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertInputDistributionKindToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

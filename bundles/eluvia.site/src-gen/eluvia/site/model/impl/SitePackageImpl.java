@@ -13,10 +13,12 @@ import eluvia.site.model.DispersivityRule;
 import eluvia.site.model.ExcavationDesign;
 import eluvia.site.model.ExcavationSoilType;
 import eluvia.site.model.FlushingDesign;
+import eluvia.site.model.InputDistributionKind;
 import eluvia.site.model.NonequilibriumEntry;
 import eluvia.site.model.PriceBook;
 import eluvia.site.model.PriceItem;
 import eluvia.site.model.Project;
+import eluvia.site.model.RankCorrelation;
 import eluvia.site.model.Revision;
 import eluvia.site.model.Sample;
 import eluvia.site.model.SamplingLocation;
@@ -29,6 +31,9 @@ import eluvia.site.model.SorptionIsotherm;
 import eluvia.site.model.SourceConcentration;
 import eluvia.site.model.TreatmentZone;
 
+import eluvia.site.model.UncertainInput;
+import eluvia.site.model.UncertaintySampling;
+import eluvia.site.model.UncertaintySettings;
 import eluvia.site.model.UnitSystem;
 import eluvia.site.model.Vertex;
 import org.eclipse.emf.ecore.EAttribute;
@@ -170,6 +175,27 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass uncertaintySettingsEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass uncertainInputEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass rankCorrelationEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EEnum complianceCriterionEEnum = null;
 
 	/**
@@ -227,6 +253,20 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	private EEnum columnTestKindEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum uncertaintySamplingEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum inputDistributionKindEEnum = null;
 
 	/**
 	 * Creates an instance of the model <b>Package</b>, registered with
@@ -416,6 +456,16 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	@Override
 	public EReference getProject_ColumnTests() {
 		return (EReference)projectEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getProject_Uncertainty() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(12);
 	}
 
 	/**
@@ -1794,6 +1844,236 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	@Override
+	public EClass getUncertaintySettings() {
+		return uncertaintySettingsEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertaintySettings_Enabled() {
+		return (EAttribute)uncertaintySettingsEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertaintySettings_RunCount() {
+		return (EAttribute)uncertaintySettingsEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertaintySettings_Seed() {
+		return (EAttribute)uncertaintySettingsEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertaintySettings_SamplingMethod() {
+		return (EAttribute)uncertaintySettingsEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getUncertaintySettings_Inputs() {
+		return (EReference)uncertaintySettingsEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getUncertaintySettings_RankCorrelations() {
+		return (EReference)uncertaintySettingsEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getUncertainInput() {
+		return uncertainInputEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_Name() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getUncertainInput_Target() {
+		return (EReference)uncertainInputEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_FeatureName() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_Distribution() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_MeanInFeatureUnit() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_StandardDeviationInFeatureUnit() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_MedianInFeatureUnit() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_GeometricStandardDeviation() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_MinimumInFeatureUnit() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_ModeInFeatureUnit() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUncertainInput_MaximumInFeatureUnit() {
+		return (EAttribute)uncertainInputEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getRankCorrelation() {
+		return rankCorrelationEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getRankCorrelation_First() {
+		return (EReference)rankCorrelationEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getRankCorrelation_Second() {
+		return (EReference)rankCorrelationEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getRankCorrelation_Coefficient() {
+		return (EAttribute)rankCorrelationEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getComplianceCriterion() {
 		return complianceCriterionEEnum;
 	}
@@ -1884,6 +2164,26 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	@Override
+	public EEnum getUncertaintySampling() {
+		return uncertaintySamplingEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EEnum getInputDistributionKind() {
+		return inputDistributionKindEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public SiteFactory getSiteFactory() {
 		return (SiteFactory)getEFactoryInstance();
 	}
@@ -1920,6 +2220,7 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		createEReference(projectEClass, PROJECT__EXCAVATION_DESIGNS);
 		createEReference(projectEClass, PROJECT__PRICE_BOOKS);
 		createEReference(projectEClass, PROJECT__COLUMN_TESTS);
+		createEReference(projectEClass, PROJECT__UNCERTAINTY);
 
 		siteEClass = createEClass(SITE);
 		createEAttribute(siteEClass, SITE__NAME);
@@ -2074,6 +2375,32 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		createEAttribute(columnTestPointEClass, COLUMN_TEST_POINT__PORE_VOLUMES);
 		createEAttribute(columnTestPointEClass, COLUMN_TEST_POINT__RELATIVE_CONCENTRATION);
 
+		uncertaintySettingsEClass = createEClass(UNCERTAINTY_SETTINGS);
+		createEAttribute(uncertaintySettingsEClass, UNCERTAINTY_SETTINGS__ENABLED);
+		createEAttribute(uncertaintySettingsEClass, UNCERTAINTY_SETTINGS__RUN_COUNT);
+		createEAttribute(uncertaintySettingsEClass, UNCERTAINTY_SETTINGS__SEED);
+		createEAttribute(uncertaintySettingsEClass, UNCERTAINTY_SETTINGS__SAMPLING_METHOD);
+		createEReference(uncertaintySettingsEClass, UNCERTAINTY_SETTINGS__INPUTS);
+		createEReference(uncertaintySettingsEClass, UNCERTAINTY_SETTINGS__RANK_CORRELATIONS);
+
+		uncertainInputEClass = createEClass(UNCERTAIN_INPUT);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__NAME);
+		createEReference(uncertainInputEClass, UNCERTAIN_INPUT__TARGET);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__FEATURE_NAME);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__DISTRIBUTION);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__MEAN_IN_FEATURE_UNIT);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__STANDARD_DEVIATION_IN_FEATURE_UNIT);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__MEDIAN_IN_FEATURE_UNIT);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__GEOMETRIC_STANDARD_DEVIATION);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__MINIMUM_IN_FEATURE_UNIT);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__MODE_IN_FEATURE_UNIT);
+		createEAttribute(uncertainInputEClass, UNCERTAIN_INPUT__MAXIMUM_IN_FEATURE_UNIT);
+
+		rankCorrelationEClass = createEClass(RANK_CORRELATION);
+		createEReference(rankCorrelationEClass, RANK_CORRELATION__FIRST);
+		createEReference(rankCorrelationEClass, RANK_CORRELATION__SECOND);
+		createEAttribute(rankCorrelationEClass, RANK_CORRELATION__COEFFICIENT);
+
 		// Create enums
 		complianceCriterionEEnum = createEEnum(COMPLIANCE_CRITERION);
 		unitSystemEEnum = createEEnum(UNIT_SYSTEM);
@@ -2084,6 +2411,8 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		solutionMethodEEnum = createEEnum(SOLUTION_METHOD);
 		excavationSoilTypeEEnum = createEEnum(EXCAVATION_SOIL_TYPE);
 		columnTestKindEEnum = createEEnum(COLUMN_TEST_KIND);
+		uncertaintySamplingEEnum = createEEnum(UNCERTAINTY_SAMPLING);
+		inputDistributionKindEEnum = createEEnum(INPUT_DISTRIBUTION_KIND);
 	}
 
 	/**
@@ -2129,6 +2458,7 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		initEReference(getProject_ExcavationDesigns(), this.getExcavationDesign(), null, "excavationDesigns", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_PriceBooks(), this.getPriceBook(), null, "priceBooks", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_ColumnTests(), this.getColumnTest(), null, "columnTests", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Uncertainty(), this.getUncertaintySettings(), null, "uncertainty", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(siteEClass, Site.class, "Site", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getSite_Name(), ecorePackage.getEString(), "name", null, 0, 1, Site.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -2283,6 +2613,32 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		initEAttribute(getColumnTestPoint_PoreVolumes(), ecorePackage.getEDouble(), "poreVolumes", null, 0, 1, ColumnTestPoint.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getColumnTestPoint_RelativeConcentration(), ecorePackage.getEDouble(), "relativeConcentration", null, 0, 1, ColumnTestPoint.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
+		initEClass(uncertaintySettingsEClass, UncertaintySettings.class, "UncertaintySettings", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getUncertaintySettings_Enabled(), ecorePackage.getEBoolean(), "enabled", null, 0, 1, UncertaintySettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertaintySettings_RunCount(), ecorePackage.getEInt(), "runCount", "2000", 0, 1, UncertaintySettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertaintySettings_Seed(), ecorePackage.getELong(), "seed", "20261201", 0, 1, UncertaintySettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertaintySettings_SamplingMethod(), this.getUncertaintySampling(), "samplingMethod", null, 0, 1, UncertaintySettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getUncertaintySettings_Inputs(), this.getUncertainInput(), null, "inputs", null, 0, -1, UncertaintySettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getUncertaintySettings_RankCorrelations(), this.getRankCorrelation(), null, "rankCorrelations", null, 0, -1, UncertaintySettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(uncertainInputEClass, UncertainInput.class, "UncertainInput", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getUncertainInput_Name(), ecorePackage.getEString(), "name", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getUncertainInput_Target(), ecorePackage.getEObject(), null, "target", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_FeatureName(), ecorePackage.getEString(), "featureName", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_Distribution(), this.getInputDistributionKind(), "distribution", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_MeanInFeatureUnit(), ecorePackage.getEDouble(), "meanInFeatureUnit", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_StandardDeviationInFeatureUnit(), ecorePackage.getEDouble(), "standardDeviationInFeatureUnit", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_MedianInFeatureUnit(), ecorePackage.getEDouble(), "medianInFeatureUnit", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_GeometricStandardDeviation(), ecorePackage.getEDouble(), "geometricStandardDeviation", "1", 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_MinimumInFeatureUnit(), ecorePackage.getEDouble(), "minimumInFeatureUnit", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_ModeInFeatureUnit(), ecorePackage.getEDouble(), "modeInFeatureUnit", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUncertainInput_MaximumInFeatureUnit(), ecorePackage.getEDouble(), "maximumInFeatureUnit", null, 0, 1, UncertainInput.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(rankCorrelationEClass, RankCorrelation.class, "RankCorrelation", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEReference(getRankCorrelation_First(), this.getUncertainInput(), null, "first", null, 0, 1, RankCorrelation.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getRankCorrelation_Second(), this.getUncertainInput(), null, "second", null, 0, 1, RankCorrelation.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getRankCorrelation_Coefficient(), ecorePackage.getEDouble(), "coefficient", null, 0, 1, RankCorrelation.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
 		// Initialize enums and add enum literals
 		initEEnum(complianceCriterionEEnum, ComplianceCriterion.class, "ComplianceCriterion");
 		addEEnumLiteral(complianceCriterionEEnum, ComplianceCriterion.EFFLUENT);
@@ -2328,6 +2684,16 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		initEEnum(columnTestKindEEnum, ColumnTestKind.class, "ColumnTestKind");
 		addEEnumLiteral(columnTestKindEEnum, ColumnTestKind.BREAKTHROUGH);
 		addEEnumLiteral(columnTestKindEEnum, ColumnTestKind.ELUTION);
+
+		initEEnum(uncertaintySamplingEEnum, UncertaintySampling.class, "UncertaintySampling");
+		addEEnumLiteral(uncertaintySamplingEEnum, UncertaintySampling.LATIN_HYPERCUBE);
+		addEEnumLiteral(uncertaintySamplingEEnum, UncertaintySampling.PLAIN);
+
+		initEEnum(inputDistributionKindEEnum, InputDistributionKind.class, "InputDistributionKind");
+		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.NORMAL);
+		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.LOGNORMAL);
+		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.UNIFORM);
+		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.TRIANGULAR);
 
 		// Create resource
 		createResource(eNS_URI);

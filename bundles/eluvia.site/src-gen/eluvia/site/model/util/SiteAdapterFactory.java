@@ -136,6 +136,18 @@ public class SiteAdapterFactory extends AdapterFactoryImpl {
 				return createColumnTestPointAdapter();
 			}
 			@Override
+			public Adapter caseUncertaintySettings(UncertaintySettings object) {
+				return createUncertaintySettingsAdapter();
+			}
+			@Override
+			public Adapter caseUncertainInput(UncertainInput object) {
+				return createUncertainInputAdapter();
+			}
+			@Override
+			public Adapter caseRankCorrelation(RankCorrelation object) {
+				return createRankCorrelationAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -390,6 +402,48 @@ public class SiteAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createColumnTestPointAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.UncertaintySettings <em>Uncertainty Settings</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.UncertaintySettings
+	 * @generated
+	 */
+	public Adapter createUncertaintySettingsAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.UncertainInput <em>Uncertain Input</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.UncertainInput
+	 * @generated
+	 */
+	public Adapter createUncertainInputAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.RankCorrelation <em>Rank Correlation</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.RankCorrelation
+	 * @generated
+	 */
+	public Adapter createRankCorrelationAdapter() {
 		return null;
 	}
 

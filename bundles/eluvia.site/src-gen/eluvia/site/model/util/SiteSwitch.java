@@ -168,6 +168,24 @@ public class SiteSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case SitePackage.UNCERTAINTY_SETTINGS: {
+				UncertaintySettings uncertaintySettings = (UncertaintySettings)theEObject;
+				T result = caseUncertaintySettings(uncertaintySettings);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
+			case SitePackage.UNCERTAIN_INPUT: {
+				UncertainInput uncertainInput = (UncertainInput)theEObject;
+				T result = caseUncertainInput(uncertainInput);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
+			case SitePackage.RANK_CORRELATION: {
+				RankCorrelation rankCorrelation = (RankCorrelation)theEObject;
+				T result = caseRankCorrelation(rankCorrelation);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			default: return defaultCase(theEObject);
 		}
 	}
@@ -424,6 +442,51 @@ public class SiteSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseColumnTestPoint(ColumnTestPoint object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Uncertainty Settings</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Uncertainty Settings</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseUncertaintySettings(UncertaintySettings object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Uncertain Input</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Uncertain Input</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseUncertainInput(UncertainInput object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Rank Correlation</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Rank Correlation</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseRankCorrelation(RankCorrelation object) {
 		return null;
 	}
 
