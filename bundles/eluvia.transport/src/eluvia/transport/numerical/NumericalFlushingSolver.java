@@ -20,7 +20,8 @@ import eluvia.transport.TransportInputException;
  * flux (third-type) condition q C_in; the bottom face carries q C of the last cell (zero
  * gradient), which is also the flux-averaged effluent concentration. Time stepping is implicit,
  * with the variable-step second-order backward differentiation formula (BDF2, expected global
- * order 2 in time; its first step is backward Euler) applied to the conserved quantity, the
+ * order 2 in time; the first step, and any step more than twice the one before, is backward
+ * Euler) applied to the conserved quantity, the
  * solute per bulk volume; with the central scheme the expected order in space is 2 too, with
  * upwind 1. Each step solves one tridiagonal system by the Thomas algorithm; the immobile region
  * of a two-region layer is eliminated cell by cell before the solve (static condensation), so it
@@ -541,7 +542,9 @@ public final class NumericalFlushingSolver {
             double a0;
             double a1;
             double a2;
-            if (accepted == 0) {
+            if (accepted == 0 || hTry > 2.0 * hPrev * (1 + 1e-12)) {
+                // backward Euler: the first step, and the step after a short one that landed on
+                // a profile time (BDF2 is zero-stable only for step ratios below 1 + sqrt 2)
                 a0 = 1;
                 a1 = 1;
                 a2 = 0;

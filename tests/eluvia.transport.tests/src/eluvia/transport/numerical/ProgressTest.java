@@ -81,4 +81,22 @@ final class ProgressTest {
         assertThrows(IllegalArgumentException.class, () -> new NumericalFlushingSolver(column(), SolverSettings.defaults())
                 .run(FlushingRunRequest.upToPoreVolumes(1).build()).outcome(CleanupCriterion.EFFLUENT));
     }
+
+    @Test
+    void profileTimesDoNotDisturbTheResult() {
+        FlushingColumn col = column();
+        FlushingRunResult plain = new NumericalFlushingSolver(col, SolverSettings.defaults())
+                .run(FlushingRunRequest.upToPoreVolumes(100).target(CleanupCriterion.EFFLUENT, 0.01).build());
+        // profiles a hundred-millionth of a day apart force a tiny step and then a long one
+        double d = col.daysForPoreVolumes(2);
+        FlushingRunResult withProfiles = new NumericalFlushingSolver(col, SolverSettings.defaults())
+                .run(FlushingRunRequest.upToPoreVolumes(100).target(CleanupCriterion.EFFLUENT, 0.01)
+                        .profilesAtDays(d, d + 1e-8, 3 * d, 3 * d + 1e-8).build());
+        assertEquals(4, withProfiles.profiles().size());
+        assertEquals(d + 1e-8, withProfiles.profiles().get(1).timeDays(), 1e-15);
+        double expected = plain.outcome(CleanupCriterion.EFFLUENT).poreVolumes();
+        // the default step tolerance gives about 2e-4 (FiniteLayerTest); the disturbance must stay below it
+        assertEquals(expected, withProfiles.outcome(CleanupCriterion.EFFLUENT).poreVolumes(), 1e-4 * expected);
+        assertTrue(Math.abs(withProfiles.massBalance().relativeError()) < 1e-8);
+    }
 }
