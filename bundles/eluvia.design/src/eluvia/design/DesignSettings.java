@@ -235,10 +235,12 @@ public final class DesignSettings {
 
     /**
      * Search radius of the estimators, m (vertically scaled distance of eluvia.zone SampleSet); NaN
-     * (default) for the automatic choice: twice the largest plan distance from a sampling location
-     * to its nearest neighbour (so that the estimate does not reach far beyond the sampled ground;
-     * a stated choice), no limit with a single location. Blocks beyond it from every sample have
-     * no estimate and are not counted.
+     * (default) for the automatic choice: the largest plan distance from a sampling location to
+     * its nearest neighbour (a stated choice: every point of a sampled area without large holes is
+     * within it of a sample, and the estimate reaches no farther than the sampling spacing beyond
+     * the outermost samples), no limit with a single location. Blocks beyond it from every sample
+     * have no estimate and are not counted. The volume above the level depends on it wherever the
+     * sampling is sparse: look at the unestimated blocks and at the result with a larger radius.
      */
     public double searchRadiusMetres() {
         return searchRadiusMetres;
@@ -352,7 +354,7 @@ public final class DesignSettings {
         s.add(line("margin around the samples without a site boundary (m)", fmt(sampleMarginMetres),
                 sampleMarginMetres == d.sampleMarginMetres));
         s.add(line("search radius (m, scaled)", Double.isNaN(searchRadiusMetres)
-                ? "automatic: twice the largest nearest-neighbour distance between sampling locations"
+                ? "automatic: the largest nearest-neighbour distance between sampling locations"
                 : fmt(searchRadiusMetres), Double.isNaN(searchRadiusMetres)));
         s.add(line("variogram", variogram == null
                 ? "spherical, no nugget, sill = sample variance, range = half the largest sample separation (first guess, not fitted)"

@@ -58,6 +58,22 @@ final class ZoneAnalysisTest {
     }
 
     @Test
+    void blocksBeyondTheAutomaticSearchRadiusHaveNoEstimate() {
+        // the boundary reaches 20 m east of the sampled square; sampling locations 2 m apart, so the automatic
+        // radius is 2 m: the 10 columns of blocks whose centres lie 4 m or more east of the last samples
+        // (x = 23 ... 39 m, 9 of them, or 10 if x = 21 m falls just outside) get no estimate, 6 layers each
+        Project p = TestProjects.sampledField(0.2);
+        TestProjects.boundary(p.getSite(), 40, 20);
+        ZoneAnalysis z = DesignPipeline.run(p, onSampleGrid(ZoneEstimator.INVERSE_DISTANCE), DesignProgress.NONE)
+                .zoneAnalysis();
+        assertEquals(1200, z.blockModel().blockCount()); // 20 x 10 x 6 blocks (by hand)
+        int unestimated = z.exceedance().unestimatedBlockCount();
+        assertTrue(unestimated == 9 * 10 * 6 || unestimated == 10 * 10 * 6, "unestimated blocks " + unestimated);
+        assertEquals(54.0, z.volumeAboveLevelCubicMetres(), 1e-9); // the box, as above
+        assertTrue(z.notes().stream().anyMatch(n -> n.startsWith("Search radius 2.000 m")), z.notes().toString());
+    }
+
+    @Test
     void withoutSamplesTheAnalysisSaysItIsNotAvailable() {
         Project p = TestProjects.singleLayer(0.2, 1, eluvia.site.model.ComplianceCriterion.EFFLUENT);
         DesignRun run = DesignPipeline.run(p, DesignSettings.builder().pushDownBelowColumn(false).build(),

@@ -137,7 +137,7 @@ public final class ZoneAnalyser {
         if (Double.isNaN(radius)) {
             radius = automaticRadius(site);
             notes.add(Double.isInfinite(radius) ? "Search radius: no limit (a single sampling location)."
-                    : String.format(Locale.ROOT, "Search radius %.4g m (scaled): twice the largest distance from a sampling "
+                    : String.format(Locale.ROOT, "Search radius %.4g m (scaled): the largest distance from a sampling "
                             + "location to its nearest neighbour (automatic); blocks farther from every sample have no "
                             + "estimate and are not counted.", radius));
         }
@@ -250,7 +250,7 @@ public final class ZoneAnalyser {
         return BlockEstimate.ofValues(model, values, description);
     }
 
-    /** Twice the largest plan distance from a sampling location to its nearest neighbour, m (infinite for one location). */
+    /** The largest plan distance from a sampling location to its nearest neighbour, m (infinite for one location). */
     static double automaticRadius(Site site) {
         List<double[]> points = new ArrayList<>();
         for (SamplingLocation l : site.getSamplingLocations()) {
@@ -271,7 +271,7 @@ public final class ZoneAnalyser {
                 largest = Math.max(largest, nearest);
             }
         }
-        return largest > 0 ? 2 * largest : Double.POSITIVE_INFINITY;
+        return largest > 0 ? largest : Double.POSITIVE_INFINITY;
     }
 
     private static ExperimentalVariogram experimental(SampleSet samples) {
