@@ -1,0 +1,56 @@
+package eluvia.report;
+
+import java.util.List;
+import java.util.Set;
+
+/**
+ * What a design package contains beyond its fixed parts.
+ *
+ * @param writePdf whether to write {@code design-package.pdf} beside the HTML
+ * @param alternatives names of the alternatives to report (flushing designs and priced alternatives),
+ *        or null for all of them
+ * @param verificationCases the verification cases to run (null for
+ *        {@link VerificationAppendix#standardCases()}); set only through {@link #withVerificationCases}
+ */
+public record PackageOptions(boolean writePdf, Set<String> alternatives, List<VerificationAppendix.Case> verificationCases) {
+
+    /** Copies the collections. */
+    public PackageOptions {
+        alternatives = alternatives == null ? null : Set.copyOf(alternatives);
+        verificationCases = verificationCases == null ? null : List.copyOf(verificationCases);
+    }
+
+    /** Everything: the PDF and every alternative, with the standard verification cases. */
+    public static PackageOptions defaults() {
+        return new PackageOptions(true, null, null);
+    }
+
+    /** The same options with or without the PDF. */
+    public PackageOptions withPdf(boolean pdf) {
+        return new PackageOptions(pdf, alternatives, verificationCases);
+    }
+
+    /** The same options reporting only the alternatives (and flushing designs) of these names. */
+    public PackageOptions withAlternatives(Set<String> names) {
+        if (names == null || names.isEmpty()) {
+            throw new IllegalArgumentException("alternatives to report are " + (names == null ? "missing (null)" : "empty")
+                    + "; allowed: at least one name (use defaults() for all alternatives)");
+        }
+        return new PackageOptions(writePdf, names, verificationCases);
+    }
+
+    /** The same options with other verification cases: for testing how a failing case is reported. */
+    PackageOptions withVerificationCases(List<VerificationAppendix.Case> cases) {
+        return new PackageOptions(writePdf, alternatives, cases);
+    }
+
+    /** Whether an alternative or design of this name is reported. */
+    public boolean reports(String name) {
+        return alternatives == null || alternatives.contains(name);
+    }
+
+    /** The cases to run. */
+    List<VerificationAppendix.Case> casesToRun() {
+        return verificationCases == null ? VerificationAppendix.standardCases() : verificationCases;
+    }
+}

@@ -1,0 +1,218 @@
+package eluvia.report.content;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import eluvia.cost.CostEstimate;
+import eluvia.design.AlternativeResult;
+import eluvia.design.ContaminantFlushing;
+import eluvia.design.EnlargementPoint;
+import eluvia.design.FlushingDesignResult;
+import eluvia.design.FlushingMethod;
+import eluvia.design.ZoneEnlargement;
+import eluvia.report.chart.Axis;
+import eluvia.report.chart.BarChart;
+import eluvia.report.chart.BarSeries;
+import eluvia.report.chart.LineChart;
+import eluvia.report.chart.Marker;
+import eluvia.report.chart.Outline;
+import eluvia.report.chart.PlanView;
+import eluvia.report.chart.ValuePoint;
+import eluvia.report.chart.XySeries;
+import eluvia.site.model.Contaminant;
+import eluvia.site.model.Project;
+import eluvia.site.model.Sample;
+import eluvia.site.model.SamplingLocation;
+import eluvia.site.model.TreatmentZone;
+import eluvia.site.model.Vertex;
+import eluvia.transport.CleanupCriterion;
+import eluvia.transport.FlushingEstimate;
+import eluvia.transport.FlushingModel;
+import eluvia.transport.FlushingModels;
+import eluvia.transport.LayerTransport;
+
+/**
+ * The chart data of a design package, from results the pipeline already chose. The residual curves
+ * sample the chosen analytical models ({@link FlushingModel#remainingFraction}) on a grid of pore
+ * volumes: presentation of a result, not a new one. Nothing here solves anything else.
+ */
+public final class ResultFigures {
+
+    /** Points of a residual curve (dimensionless count). */
+    public static final int CURVE_POINTS = 121;
+    /** Smallest fraction drawn on a logarithmic residual axis (dimensionless); lower points are left out. */
+    public static final double SMALLEST_FRACTION_DRAWN = 1e-8;
+
+    private ResultFigures() {
+    }
+
+    /**
+     * Remaining fraction against pore volumes for every contaminant and criterion of a design by the
+     * equilibrium finite-layer solution, and by the two-region solution for the design's criterion
+     * where the contaminant has one; markers at the design's pore volumes and at each target.
+     */
+    public static LineChart residualCurves(FlushingDesignResult r) {
+        double end = curveEnd(r);
+        List<XySeries> series = new ArrayList<>();
+        List<Marker> targets = new ArrayList<>();
+        for (ContaminantFlushing c : r.contaminants()) {
+            FlushingEstimate any = c.estimate(r.criterion());
+            LayerTransport t = any.transport();
+            FlushingModel equilibrium = FlushingModels.finiteLayer(t);
+            for (CleanupCriterion k : CleanupCriterion.values()) {
+                series.add(curve(c.contaminantName() + ", " + k.description() + " (equilibrium)", equilibrium, k, end));
+            }
+            if (c.twoRegion() != null && c.method(FlushingMethod.TWO_REGION).map(m -> m.available()).orElse(false)
+                    && Double.isFinite(t.peclet())) {
+                FlushingModel two = FlushingModels.twoRegion(t, c.twoRegion().beta(), c.twoRegion().omega());
+                series.add(curve(c.contaminantName() + ", " + r.criterion().description() + " (two-region)", two,
+                        r.criterion(), end));
+            }
+            if (c.targetFraction() > 0 && c.targetFraction() < 1) {
+                targets.add(new Marker(c.targetFraction(), "target " + c.contaminantName()));
+            }
+        }
+        List<Marker> pv = Double.isFinite(r.poreVolumes()) ? List.of(new Marker(r.poreVolumes(), "design"))
+                : List.of();
+        return new LineChart("", Axis.dimensionless("Pore volumes flushed"),
+                Axis.dimensionless("Remaining fraction C/C0"), series, true, pv, targets);
+    }
+
+    /** The largest pore volumes drawn: a little past the design's, or the search limit when the target is not reached. */
+    static double curveEnd(FlushingDesignResult r) {
+        double end = 0;
+        for (ContaminantFlushing c : r.contaminants()) {
+            for (CleanupCriterion k : CleanupCriterion.values()) {
+                FlushingEstimate e = c.estimate(k);
+                if (e != null && e.result().reachable()) {
+                    end = Math.max(end, e.result().poreVolumes());
+                }
+            }
+        }
+        if (Double.isFinite(r.poreVolumes())) {
+            end = Math.max(end, r.poreVolumes());
+        }
+        if (!(end > 0)) {
+            end = r.contaminants().isEmpty() ? 10 : r.contaminants().get(0).estimate(r.criterion()).result().maxPoreVolumes();
+        }
+        return 1.2 * end;
+    }
+
+    private static XySeries curve(String name, FlushingModel m, CleanupCriterion k, double end) {
+        List<double[]> pts = new ArrayList<>();
+        for (int i = 0; i < CURVE_POINTS; i++) {
+            double t = end * i / (CURVE_POINTS - 1);
+            double f = m.remainingFraction(k, t);
+            if (f >= SMALLEST_FRACTION_DRAWN) {
+                pts.add(new double[] { t, f });
+            }
+        }
+        double[] x = new double[pts.size()];
+        double[] y = new double[pts.size()];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = pts.get(i)[0];
+            y[i] = pts.get(i)[1];
+        }
+        return new XySeries(name, x, y);
+    }
+
+    /**
+     * Present value of each priced alternative of one currency, stacked: capital, present value of
+     * annual O&amp;M, present value of periodic costs. Null when no alternative of the currency is priced.
+     */
+    public static BarChart costBreakdown(List<AlternativeResult> alternatives, String currency) {
+        List<String> names = new ArrayList<>();
+        List<double[]> parts = new ArrayList<>();
+        for (AlternativeResult a : alternatives) {
+            CostEstimate e = a.estimate();
+            if (!a.available() || e == null || !e.currency().equals(currency)) {
+                continue;
+            }
+            names.add(a.name());
+            parts.add(new double[] { e.capital().total().amount(), e.presentValueOfAnnual().amount(),
+                    e.presentValueOfPeriodic().amount() });
+        }
+        if (names.isEmpty()) {
+            return null;
+        }
+        String[] series = { "Capital", "Present value of annual O&M", "Present value of periodic costs" };
+        List<BarSeries> bars = new ArrayList<>();
+        for (int s = 0; s < series.length; s++) {
+            double[] v = new double[names.size()];
+            for (int i = 0; i < v.length; i++) {
+                v[i] = parts.get(i)[s];
+            }
+            bars.add(new BarSeries(series[s], v));
+        }
+        return new BarChart("", new Axis("Present value", currency), "Alternative", names, bars, true);
+    }
+
+    /** Volume above the cleanup level against delay for each zone with an enlargement; null when none. */
+    public static LineChart enlargement(List<ZoneEnlargement> enlargements) {
+        List<XySeries> series = new ArrayList<>();
+        for (ZoneEnlargement z : enlargements) {
+            if (!z.available() || z.envelope().isEmpty()) {
+                continue;
+            }
+            double[] x = z.envelope().stream().mapToDouble(EnlargementPoint::delayYears).toArray();
+            double[] y = z.envelope().stream().mapToDouble(EnlargementPoint::volumeAboveLevelCubicMetres).toArray();
+            series.add(new XySeries(z.zoneName(), x, y));
+        }
+        if (series.isEmpty()) {
+            return null;
+        }
+        return new LineChart("", new Axis("Delay before the remedy starts", "yr"),
+                new Axis("Volume above the cleanup level", "m\u00b3"), series, false, List.of(), List.of());
+    }
+
+    /**
+     * Plan of the site: the sampling locations coloured by the highest sample of one contaminant
+     * there (non-detects at their detection limit), the site boundary and the zone footprints.
+     * Null when there is nothing to draw.
+     */
+    public static PlanView plan(Project p, Contaminant contaminant) {
+        List<ValuePoint> points = new ArrayList<>();
+        for (SamplingLocation l : p.getSite().getSamplingLocations()) {
+            double max = Double.NaN;
+            for (Sample s : l.getSamples()) {
+                if (s.getContaminant() != contaminant) {
+                    continue;
+                }
+                double v = s.isNonDetect() ? s.getDetectionLimitMilligramsPerKg() : s.getConcentrationMilligramsPerKg();
+                if (v > 0 && !(v <= max)) {
+                    max = v;
+                }
+            }
+            if (Double.isFinite(max)) {
+                points.add(new ValuePoint(l.getName(), l.getEastingMetres(), l.getNorthingMetres(), max));
+            }
+        }
+        List<Outline> outlines = new ArrayList<>();
+        if (p.getSite().getBoundary().size() >= 3) {
+            outlines.add(outline("Site boundary", p.getSite().getBoundary()));
+        }
+        for (TreatmentZone z : p.getSite().getZones()) {
+            if (z.getFootprint().size() >= 3) {
+                outlines.add(outline(z.getName(), z.getFootprint()));
+            }
+        }
+        if (points.isEmpty() && outlines.isEmpty()) {
+            return null;
+        }
+        return new PlanView("", new Axis("Easting", "m"), new Axis("Northing", "m"),
+                new Axis(contaminant.getName() + " in soil, highest sample", "mg/kg"), points, outlines, true);
+    }
+
+    private static Outline outline(String name, List<Vertex> vs) {
+        double[] x = vs.stream().mapToDouble(Vertex::getEastingMetres).toArray();
+        double[] y = vs.stream().mapToDouble(Vertex::getNorthingMetres).toArray();
+        return new Outline(name, x, y);
+    }
+
+    /** A figure id from a name: lower case, letters and digits, hyphens between words. */
+    public static String id(String prefix, String name) {
+        String s = (prefix + "-" + name).toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-+)|(-+$)", "");
+        return s.length() > 64 ? s.substring(0, 64).replaceAll("-+$", "") : s;
+    }
+}
