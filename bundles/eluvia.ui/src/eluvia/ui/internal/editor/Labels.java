@@ -13,7 +13,7 @@ import eluvia.site.model.TreatmentZone;
 import eluvia.ui.internal.Messages;
 
 /** How model values are named on screen. */
-final class Labels {
+public final class Labels {
 
     private Labels() {
     }
@@ -22,7 +22,7 @@ final class Labels {
      * The label of an enumeration literal: the message {@code Enum_<Type>_<LITERAL>}, or the
      * literal's own name when there is none.
      */
-    static String of(Enumerator literal) {
+    public static String of(Enumerator literal) {
         if (literal == null) {
             return Messages.Fields_none;
         }
@@ -44,7 +44,7 @@ final class Labels {
         return List.copyOf(literals);
     }
 
-    static String name(Object o) {
+    public static String name(Object o) {
         String n;
         if (o instanceof SoilLayer l) {
             n = l.getName();

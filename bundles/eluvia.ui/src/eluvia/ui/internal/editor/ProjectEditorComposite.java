@@ -25,7 +25,8 @@ import eluvia.ui.internal.fields.UnitDisplay;
 
 /**
  * The project editor's content: a caution line, one page per part of the project (site, layers,
- * contaminants, sampling, cleanup levels, zones, flushing, excavation, price books, column tests)
+ * contaminants, sampling, cleanup levels, zones, flushing, excavation, price books, column tests,
+ * uncertainty)
  * and the message line for values that are kept as typed but not accepted. Every edit goes through
  * the document's command stack. Results are not shown here but in the result views, which follow
  * the active editor. The composite computes nothing.
@@ -82,6 +83,7 @@ public final class ProjectEditorComposite extends Composite implements Navigator
         pages.add(new ExcavationPage(bindings, cautionColour));
         pages.add(new PriceBooksPage(bindings, cautionColour));
         pages.add(new ColumnTestsPage(bindings));
+        pages.add(new UncertaintyPage(bindings));
         for (EditorPage page : pages) {
             CTabItem item = new CTabItem(tabs, SWT.NONE);
             item.setText(page.title());

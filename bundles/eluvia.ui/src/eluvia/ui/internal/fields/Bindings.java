@@ -314,6 +314,12 @@ public final class Bindings {
             }
             return (int) stored;
         }
+        if (type == long.class || type == Long.class) {
+            if (stored != Math.rint(stored) || Math.abs(stored) > 9.007199254740992E15) {
+                return null;
+            }
+            return (long) stored;
+        }
         return stored;
     }
 

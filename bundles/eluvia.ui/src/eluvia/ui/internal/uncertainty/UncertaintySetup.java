@@ -4,45 +4,59 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 
+import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 
 import eluvia.design.DesignPipeline;
 import eluvia.design.FlushingDesignResult;
+import eluvia.design.uncertainty.RankCorrelationMatrix;
+import eluvia.design.uncertainty.SamplingMethod;
+import eluvia.design.uncertainty.SimulationSettings;
+import eluvia.design.uncertainty.UncertaintyInputException;
 import eluvia.design.uncertainty.UncertaintyStudy;
 import eluvia.site.model.Contaminant;
+import eluvia.site.model.DispersivityRule;
 import eluvia.site.model.FlushingDesign;
+import eluvia.site.model.InputDistributionKind;
 import eluvia.site.model.Project;
+import eluvia.site.model.RankCorrelation;
+import eluvia.site.model.SiteFactory;
 import eluvia.site.model.SitePackage;
 import eluvia.site.model.SoilLayer;
+import eluvia.site.model.UncertainInput;
+import eluvia.site.model.UncertaintySampling;
+import eluvia.site.model.UncertaintySettings;
 import eluvia.ui.internal.Messages;
 
 /**
- * Turns a project and the inputs the user lets vary into a study of the uncertainty engine whose
+ * Turns a project's uncertainty settings (site model: {@link UncertaintySettings} with its
+ * {@link UncertainInput}s and {@link RankCorrelation}s) into a study of the uncertainty engine whose
  * model is the design pipeline: each run copies the project, sets the sampled values and runs
  * {@link DesignPipeline#flush} for every flushing design; its outputs are the pore volumes, the
- * calendar days and the water to capture of each design. The workbench only chooses the inputs;
- * every number comes from the pipeline and the engine.
+ * calendar days and the water to capture of each design. The workbench only translates the
+ * project's choices; every number comes from the pipeline and the engine.
  *
- * <p>The default spreads offered ({@link #defaults}) are stated starting points, not data: a
- * triangular &plusmn;{@value #FLUX_SPREAD_PERCENT} % on each design's Darcy flux (operating
- * tolerance), a lognormal of geometric standard deviation {@value #KOC_GEOMETRIC_SD} on each Koc
- * (measured Koc of one compound scatter by about a factor of two, from memory) and
- * {@value #DISPERSIVITY_GEOMETRIC_SD} on each layer's entered dispersivity (field values scatter
- * over orders of magnitude at one scale, Gelhar, Welty and Rehfeldt 1992), and a triangular
- * &plusmn;{@value #FOC_SPREAD_PERCENT} % on each layer's organic carbon fraction. The user edits
- * them in the Uncertainty view.
+ * <p>{@link #suggestions} offers inputs with stated starting spreads, not data: a triangular
+ * &plusmn;{@value #FLUX_SPREAD_PERCENT} % on each design's Darcy flux, a lognormal of geometric
+ * standard deviation {@value #KOC_GEOMETRIC_SD} on each Koc (measured Koc of one compound scatter
+ * by about a factor of two, from memory), {@value #DISPERSIVITY_GEOMETRIC_SD} on each entered
+ * dispersivity (field values scatter over orders of magnitude at one scale, Gelhar, Welty and
+ * Rehfeldt 1992) and a triangular &plusmn;{@value #FOC_SPREAD_PERCENT} % on each organic carbon
+ * fraction. The user edits them on the editor's Uncertainty page.
  */
 public final class UncertaintySetup {
 
-    /** Default half-width of the triangular spread of a Darcy flux, per cent of the value. */
+    /** Suggested half-width of the triangular spread of a Darcy flux, per cent of the value. */
     public static final double FLUX_SPREAD_PERCENT = 25;
-    /** Default geometric standard deviation of a Koc (dimensionless). */
+    /** Suggested geometric standard deviation of a Koc (dimensionless). */
     public static final double KOC_GEOMETRIC_SD = 2;
-    /** Default geometric standard deviation of an entered dispersivity (dimensionless). */
+    /** Suggested geometric standard deviation of an entered dispersivity (dimensionless). */
     public static final double DISPERSIVITY_GEOMETRIC_SD = 3;
-    /** Default half-width of the triangular spread of an organic carbon fraction, per cent of the value. */
+    /** Suggested half-width of the triangular spread of an organic carbon fraction, per cent of the value. */
     public static final double FOC_SPREAD_PERCENT = 30;
 
     private static final SitePackage P = SitePackage.eINSTANCE;
@@ -65,61 +79,165 @@ public final class UncertaintySetup {
         return Messages.bind(Messages.Uncertainty_outputWater, design);
     }
 
-    /** The inputs offered for a project, with the default spreads stated in the class comment. */
-    public static List<UncertainParameter> defaults(Project project) {
-        List<UncertainParameter> out = new ArrayList<>();
+    /** The SI unit a model attribute's name states, e.g. m/d for darcyFluxMetresPerDay; "-" when it states none. */
+    public static String unitOf(String featureName) {
+        String f = featureName == null ? "" : featureName;
+        String[][] suffixes = { { "MetresPerDay", "m/d" }, { "SquareMetresPerSecond", "m2/s" }, { "SquareMetres", "m2" },
+                { "CubicMetres", "m3" }, { "KgPerCubicMetre", "kg/m3" }, { "KilogramsPerCubicMetre", "kg/m3" },
+                { "LitresPerKg", "L/kg" }, { "MilligramsPerKg", "mg/kg" }, { "MilligramsPerLitre", "mg/L" },
+                { "LitresPerMilligram", "L/mg" }, { "Kilograms", "kg" }, { "PerDay", "1/d" }, { "Days", "d" },
+                { "Metres", "m" }, { "PerUnit", "per unit" } };
+        for (String[] s : suffixes) {
+            if (f.endsWith(s[0])) {
+                return s[1];
+            }
+        }
+        return "-";
+    }
+
+    /** The name an input has in results: its own, or one made from its target and feature. */
+    public static String nameOf(UncertainInput input) {
+        if (input.getName() != null && !input.getName().isBlank()) {
+            return input.getName().trim();
+        }
+        return describe(input.getTarget()) + " " + input.getFeatureName();
+    }
+
+    /** A short description of a project object, e.g. "Layer Silty sand". */
+    public static String describe(EObject o) {
+        if (o == null) {
+            return Messages.Fields_none;
+        }
+        EStructuralFeature name = o.eClass().getEStructuralFeature("name");
+        Object n = name == null ? null : o.eGet(name);
+        String type = o.eClass().getName();
+        if (n == null && o.eClass().getEStructuralFeature("code") != null) {
+            n = o.eGet(o.eClass().getEStructuralFeature("code"));
+        }
+        return n == null ? type : type + " " + n;
+    }
+
+    /** Inputs offered for a project that has none yet, with the stated spreads of the class comment. */
+    public static List<UncertainInput> suggestions(Project project) {
+        List<UncertainInput> out = new ArrayList<>();
         for (FlushingDesign d : project.getFlushingDesigns()) {
             double q = d.getDarcyFluxMetresPerDay();
-            out.add(new UncertainParameter(Messages.bind(Messages.Uncertainty_inputFlux, d.getName()), "m/d", d,
-                    P.getFlushingDesign_DarcyFluxMetresPerDay(), q > 0 ? UncertainParameter.Kind.TRIANGULAR
-                            : UncertainParameter.Kind.FIXED,
-                    q * (1 - FLUX_SPREAD_PERCENT / 100), q, q * (1 + FLUX_SPREAD_PERCENT / 100)));
+            if (q > 0) {
+                out.add(triangular(d, P.getFlushingDesign_DarcyFluxMetresPerDay(),
+                        Messages.bind(Messages.Uncertainty_inputFlux, d.getName()), q * (1 - FLUX_SPREAD_PERCENT / 100), q,
+                        q * (1 + FLUX_SPREAD_PERCENT / 100)));
+            }
         }
         for (Contaminant c : project.getContaminants()) {
-            double koc = c.getKocLitresPerKg();
-            boolean vary = koc > 0 && !c.isKdEntered();
-            out.add(new UncertainParameter(Messages.bind(Messages.Uncertainty_inputKoc, c.getName()), "L/kg", c,
-                    P.getContaminant_KocLitresPerKg(), vary ? UncertainParameter.Kind.LOGNORMAL : UncertainParameter.Kind.FIXED,
-                    koc, KOC_GEOMETRIC_SD, 0));
+            if (c.getKocLitresPerKg() > 0 && !c.isKdEntered()) {
+                out.add(lognormal(c, P.getContaminant_KocLitresPerKg(), Messages.bind(Messages.Uncertainty_inputKoc,
+                        c.getName()), c.getKocLitresPerKg(), KOC_GEOMETRIC_SD));
+            }
         }
         if (project.getSite() != null) {
             for (SoilLayer l : project.getSite().getLayers()) {
-                double a = l.getDispersivityMetres();
-                boolean entered = l.getDispersivityRule() == eluvia.site.model.DispersivityRule.ENTERED && a > 0;
-                out.add(new UncertainParameter(Messages.bind(Messages.Uncertainty_inputDispersivity, l.getName()), "m", l,
-                        P.getSoilLayer_DispersivityMetres(), entered ? UncertainParameter.Kind.LOGNORMAL
-                                : UncertainParameter.Kind.FIXED,
-                        a, DISPERSIVITY_GEOMETRIC_SD, 0));
+                if (l.getDispersivityRule() == DispersivityRule.ENTERED && l.getDispersivityMetres() > 0) {
+                    out.add(lognormal(l, P.getSoilLayer_DispersivityMetres(),
+                            Messages.bind(Messages.Uncertainty_inputDispersivity, l.getName()), l.getDispersivityMetres(),
+                            DISPERSIVITY_GEOMETRIC_SD));
+                }
                 double foc = l.getOrganicCarbonFraction();
-                out.add(new UncertainParameter(Messages.bind(Messages.Uncertainty_inputFoc, l.getName()), "-", l,
-                        P.getSoilLayer_OrganicCarbonFraction(), foc > 0 ? UncertainParameter.Kind.TRIANGULAR
-                                : UncertainParameter.Kind.FIXED,
-                        foc * (1 - FOC_SPREAD_PERCENT / 100), foc, Math.min(0.99, foc * (1 + FOC_SPREAD_PERCENT / 100))));
+                if (foc > 0) {
+                    out.add(triangular(l, P.getSoilLayer_OrganicCarbonFraction(),
+                            Messages.bind(Messages.Uncertainty_inputFoc, l.getName()), foc * (1 - FOC_SPREAD_PERCENT / 100),
+                            foc, Math.min(0.99, foc * (1 + FOC_SPREAD_PERCENT / 100))));
+                }
             }
         }
         return out;
     }
 
+    private static UncertainInput triangular(EObject target, EAttribute a, String name, double min, double mode, double max) {
+        UncertainInput i = SiteFactory.eINSTANCE.createUncertainInput();
+        i.setName(name);
+        i.setTarget(target);
+        i.setFeatureName(a.getName());
+        i.setDistribution(InputDistributionKind.TRIANGULAR);
+        i.setMinimumInFeatureUnit(min);
+        i.setModeInFeatureUnit(mode);
+        i.setMaximumInFeatureUnit(max);
+        return i;
+    }
+
+    private static UncertainInput lognormal(EObject target, EAttribute a, String name, double median, double gsd) {
+        UncertainInput i = SiteFactory.eINSTANCE.createUncertainInput();
+        i.setName(name);
+        i.setTarget(target);
+        i.setFeatureName(a.getName());
+        i.setDistribution(InputDistributionKind.LOGNORMAL);
+        i.setMedianInFeatureUnit(median);
+        i.setGeometricStandardDeviation(gsd);
+        return i;
+    }
+
+    /** The engine's input for a model input. */
+    public static eluvia.design.uncertainty.UncertainInput engineInputOf(UncertainInput i) {
+        String name = nameOf(i);
+        String unit = unitOf(i.getFeatureName());
+        InputDistributionKind kind = i.getDistribution() == null ? InputDistributionKind.NORMAL : i.getDistribution();
+        return switch (kind) {
+        case NORMAL -> eluvia.design.uncertainty.UncertainInput.normal(name, unit, i.getMeanInFeatureUnit(),
+                i.getStandardDeviationInFeatureUnit());
+        case LOGNORMAL -> eluvia.design.uncertainty.UncertainInput.lognormal(name, unit, i.getMedianInFeatureUnit(),
+                i.getGeometricStandardDeviation());
+        case UNIFORM -> eluvia.design.uncertainty.UncertainInput.uniform(name, unit, i.getMinimumInFeatureUnit(),
+                i.getMaximumInFeatureUnit());
+        case TRIANGULAR -> eluvia.design.uncertainty.UncertainInput.triangular(name, unit, i.getMinimumInFeatureUnit(),
+                i.getModeInFeatureUnit(), i.getMaximumInFeatureUnit());
+        };
+    }
+
+    /** The engine's settings for the project's uncertainty settings and the machine's cores. */
+    public static SimulationSettings settings(UncertaintySettings s) {
+        SimulationSettings d = SimulationSettings.defaults();
+        return new SimulationSettings(s.getRunCount(), s.getSamplingMethod() == UncertaintySampling.PLAIN
+                ? SamplingMethod.PLAIN_MONTE_CARLO : SamplingMethod.LATIN_HYPERCUBE, s.getSeed(), d.threadCount(), 0);
+    }
+
     /**
-     * The study for a project: the parameters as inputs, three outputs per flushing design, the
-     * pipeline as the model. The project is copied now (on the caller's thread); the model works on
-     * copies of that copy, so the user may go on editing.
+     * The study for a project's uncertainty settings. The project is copied now (on the caller's
+     * thread); the model works on copies of that copy, so the user may go on editing.
      *
-     * @throws eluvia.design.uncertainty.UncertaintyInputException for a bad distribution, naming it
+     * @throws UncertaintyInputException when the project has no uncertain inputs or one is not usable, naming it
      */
-    public static UncertaintyStudy study(Project project, List<UncertainParameter> parameters) {
+    public static UncertaintyStudy study(Project project) {
+        UncertaintySettings settings = project.getUncertainty();
+        if (settings == null || settings.getInputs().isEmpty()) {
+            throw new UncertaintyInputException("uncertain inputs", "(none)",
+                    "at least one; add them on the editor's Uncertainty page");
+        }
         Project base = EcoreUtil.copy(project);
         Map<String, String> paths = new HashMap<>();
-        Map<String, org.eclipse.emf.ecore.EAttribute> attributes = new HashMap<>();
+        Map<String, EAttribute> attributes = new HashMap<>();
         UncertaintyStudy.Builder b = UncertaintyStudy.builder();
-        for (UncertainParameter p : parameters) {
-            b.input(p.toInput());
-            paths.put(p.name(), EcoreUtil.getRelativeURIFragmentPath(project, p.target()));
-            attributes.put(p.name(), p.attribute());
+        for (UncertainInput i : settings.getInputs()) {
+            String name = nameOf(i);
+            EObject target = i.getTarget();
+            EStructuralFeature f = target == null ? null : target.eClass().getEStructuralFeature(i.getFeatureName());
+            if (!(f instanceof EAttribute a) || a.getEAttributeType().getInstanceClass() != double.class
+                    || !EcoreUtil.isAncestor(project, target)) {
+                throw new UncertaintyInputException("uncertain input " + name, Objects.toString(i.getFeatureName()),
+                        "a number field of an object of this project; see the Problems view");
+            }
+            b.input(engineInputOf(i));
+            paths.put(name, EcoreUtil.getRelativeURIFragmentPath(project, target));
+            attributes.put(name, a);
         }
-        List<String> designs = project.getFlushingDesigns().stream().map(FlushingDesign::getName).toList();
-        for (String d : designs) {
-            b.output(poreVolumesOutput(d), "PV").output(daysOutput(d), "d").output(waterOutput(d), "m3");
+        if (!settings.getRankCorrelations().isEmpty()) {
+            RankCorrelationMatrix.Builder m = RankCorrelationMatrix.builder();
+            for (RankCorrelation r : settings.getRankCorrelations()) {
+                m.pair(nameOf(r.getFirst()), nameOf(r.getSecond()), r.getCoefficient());
+            }
+            b.rankCorrelation(m.build());
+        }
+        for (FlushingDesign d : project.getFlushingDesigns()) {
+            b.output(poreVolumesOutput(d.getName()), "PV").output(daysOutput(d.getName()), "d")
+                    .output(waterOutput(d.getName()), "m3");
         }
         b.model(values -> {
             Project copy;
@@ -127,8 +245,7 @@ public final class UncertaintySetup {
                 copy = EcoreUtil.copy(base);
             }
             for (String name : values.names()) {
-                EObject target = EcoreUtil.getEObject(copy, paths.get(name));
-                target.eSet(attributes.get(name), values.get(name));
+                EcoreUtil.getEObject(copy, paths.get(name)).eSet(attributes.get(name), values.get(name));
             }
             Map<String, Double> out = new HashMap<>();
             for (FlushingDesign d : copy.getFlushingDesigns()) {

@@ -48,7 +48,7 @@ final class StatusLine extends Composite {
         case FAILED -> text.setText(Messages.bind(Messages.Results_failed, state.failure()));
         default -> text.setText("");
         }
-        layout(true);
+        getParent().layout(true, true);
         return state.run() != null && (state.status() == ResultState.Status.READY
                 || state.status() == ResultState.Status.COMPUTING);
     }

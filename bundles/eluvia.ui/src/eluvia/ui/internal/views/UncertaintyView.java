@@ -5,14 +5,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.WeakHashMap;
 
-import org.eclipse.jface.viewers.ArrayContentProvider;
-import org.eclipse.jface.viewers.CellEditor;
-import org.eclipse.jface.viewers.ColumnLabelProvider;
-import org.eclipse.jface.viewers.ComboBoxCellEditor;
-import org.eclipse.jface.viewers.EditingSupport;
-import org.eclipse.jface.viewers.TableViewer;
-import org.eclipse.jface.viewers.TableViewerColumn;
-import org.eclipse.jface.viewers.TextCellEditor;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.layout.GridData;
@@ -22,8 +14,9 @@ import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.ProgressBar;
-import org.eclipse.swt.widgets.Spinner;
 import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
 
 import eluvia.design.uncertainty.OutputStatistics;
 import eluvia.design.uncertainty.SimulationSettings;
@@ -39,24 +32,22 @@ import eluvia.ui.internal.document.OpenDocuments;
 import eluvia.ui.internal.document.ProjectDocument;
 import eluvia.ui.internal.document.ResultState;
 import eluvia.ui.internal.fields.Numbers;
-import eluvia.ui.internal.uncertainty.UncertainParameter;
+import eluvia.ui.internal.editor.Labels;
 import eluvia.ui.internal.uncertainty.UncertaintyJob;
 import eluvia.ui.internal.uncertainty.UncertaintySetup;
 
 /**
- * The Uncertainty view's content: which inputs of the active project vary and how (a table of
- * distributions, starting from stated defaults), the number of runs, Run and Cancel, the progress
- * of the Monte Carlo job, and for a chosen result its histogram with P10 / P50 / P90 and its
- * tornado. The inputs chosen here are kept for the session, not in the project file.
+ * The Uncertainty view's content: the uncertain inputs of the active project (set on the editor's
+ * Uncertainty page; a button adds suggested ones when there are none), Run and Cancel, the
+ * progress of the Monte Carlo job, and for a chosen result its histogram with P10 / P50 / P90 and
+ * its tornado.
  */
 public final class UncertaintyView extends DocumentView {
 
-    /** Default number of runs: the example's pipeline takes about a tenth of a second per design and run. */
-    public static final int DEFAULT_RUNS = 200;
-
     private final Map<ProjectDocument, Session> sessions = new WeakHashMap<>();
-    private final TableViewer inputs;
-    private final Spinner runs;
+    private final Table inputs;
+    private final Label settings;
+    private final Button suggest;
     private final Button run;
     private final Button cancel;
     private final ProgressBar progress;
@@ -65,11 +56,12 @@ public final class UncertaintyView extends DocumentView {
     private final ChartCanvas histogram;
     private final ChartCanvas tornado;
     private final Label statistics;
+    private final ProjectDocument.Listener modelListener;
     private ProjectDocument document;
+    private boolean refreshPending;
 
     /** What the view keeps per document. */
     private static final class Session {
-        List<UncertainParameter> parameters;
         UncertaintyJob job;
         UncertaintyResult result;
         String failure;
@@ -92,21 +84,22 @@ public final class UncertaintyView extends DocumentView {
         GridLayout tl = new GridLayout(1, false);
         tl.marginWidth = 0;
         top.setLayout(tl);
-        inputs = new TableViewer(top, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL);
-        Table table = inputs.getTable();
-        table.setHeaderVisible(true);
-        table.setLinesVisible(true);
-        table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        inputs.setContentProvider(ArrayContentProvider.getInstance());
-        columns();
+        inputs = new Table(top, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL);
+        inputs.setHeaderVisible(true);
+        inputs.setLinesVisible(true);
+        inputs.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        for (String h : new String[] { Messages.Uncertainty_input, Messages.Uncertainty_unit, Messages.Uncertainty_distribution,
+                Messages.Uncertainty_p10, Messages.Uncertainty_p50, Messages.Uncertainty_p90 }) {
+            new TableColumn(inputs, SWT.LEFT).setText(h);
+        }
         Composite bar = new Composite(top, SWT.NONE);
         GridLayout bl = new GridLayout(6, false);
         bl.marginWidth = 0;
         bar.setLayout(bl);
         bar.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        new Label(bar, SWT.NONE).setText(Messages.Uncertainty_runs);
-        runs = new Spinner(bar, SWT.BORDER);
-        runs.setValues(DEFAULT_RUNS, SimulationSettings.MIN_RUNS, 1_000_000, 0, 50, 500);
+        settings = new Label(bar, SWT.NONE);
+        suggest = new Button(bar, SWT.PUSH);
+        suggest.setText(Messages.UncertaintyPage_suggest);
         run = new Button(bar, SWT.PUSH);
         run.setText(Messages.Uncertainty_run);
         cancel = new Button(bar, SWT.PUSH);
@@ -116,9 +109,9 @@ public final class UncertaintyView extends DocumentView {
         GridData pd = new GridData(SWT.FILL, SWT.CENTER, true, false);
         pd.widthHint = 120;
         progress.setLayoutData(pd);
-        status = new Label(bar, SWT.WRAP);
+        status = new Label(top, SWT.WRAP);
         GridData sd = new GridData(SWT.FILL, SWT.CENTER, true, false);
-        sd.widthHint = 200;
+        sd.widthHint = 300;
         status.setLayoutData(sd);
 
         Composite bottom = new Composite(sash, SWT.NONE);
@@ -142,104 +135,106 @@ public final class UncertaintyView extends DocumentView {
         statistics.setLayoutData(std);
         sash.setWeights(40, 60);
 
+        modelListener = new ProjectDocument.Listener() {
+            @Override
+            public void modelChanged(ProjectDocument d, org.eclipse.emf.common.notify.Notification n) {
+                scheduleInputs();
+            }
+        };
+        addDisposeListener(e -> {
+            if (document != null) {
+                document.removeListener(modelListener);
+            }
+        });
+        suggest.addListener(SWT.Selection, e -> addSuggestions());
         run.addListener(SWT.Selection, e -> runSimulation());
         cancel.addListener(SWT.Selection, e -> cancelSimulation());
         output.addListener(SWT.Selection, e -> showCharts());
         start();
     }
 
-    private void columns() {
-        column(Messages.Uncertainty_input, 190, p -> p.name(), null);
-        column(Messages.Uncertainty_unit, 50, p -> p.unit(), null);
-        String[] kinds = java.util.Arrays.stream(UncertainParameter.Kind.values()).map(UncertainParameter.Kind::label)
-                .toArray(String[]::new);
-        column(Messages.Uncertainty_distribution, 230, p -> p.kind().label(), new EditingSupport(inputs) {
-            private final ComboBoxCellEditor editor = new ComboBoxCellEditor(inputs.getTable(), kinds, SWT.READ_ONLY);
-
-            @Override
-            protected CellEditor getCellEditor(Object element) {
-                return editor;
+    private void scheduleInputs() {
+        if (refreshPending || isDisposed()) {
+            return;
+        }
+        refreshPending = true;
+        getDisplay().asyncExec(() -> {
+            refreshPending = false;
+            if (!isDisposed()) {
+                showInputs();
+                showSession();
             }
+        });
+    }
 
-            @Override
-            protected boolean canEdit(Object element) {
-                return true;
-            }
+    /** Adds the suggested inputs to the project (one undoable edit). */
+    public void addSuggestions() {
+        if (document == null) {
+            return;
+        }
+        var project = document.project();
+        var P = eluvia.site.model.SitePackage.eINSTANCE;
+        if (project.getUncertainty() == null) {
+            var created = eluvia.site.model.SiteFactory.eINSTANCE.createUncertaintySettings();
+            created.setEnabled(true);
+            created.getInputs().addAll(UncertaintySetup.suggestions(project));
+            document.execute(org.eclipse.emf.edit.command.SetCommand.create(document.domain(), project,
+                    P.getProject_Uncertainty(), created));
+        } else if (project.getUncertainty().getInputs().isEmpty()) {
+            document.execute(org.eclipse.emf.edit.command.AddCommand.create(document.domain(), project.getUncertainty(),
+                    P.getUncertaintySettings_Inputs(), UncertaintySetup.suggestions(project)));
+        }
+    }
 
-            @Override
-            protected Object getValue(Object element) {
-                return ((UncertainParameter) element).kind().ordinal();
-            }
-
-            @Override
-            protected void setValue(Object element, Object value) {
-                if (value instanceof Integer i && i >= 0) {
-                    ((UncertainParameter) element).setKind(UncertainParameter.Kind.values()[i]);
-                    inputs.update(element, null);
+    private void showInputs() {
+        inputs.removeAll();
+        var s = document == null ? null : document.project().getUncertainty();
+        if (s != null) {
+            for (var i : s.getInputs()) {
+                TableItem item = new TableItem(inputs, SWT.NONE);
+                String name = UncertaintySetup.nameOf(i);
+                String unit = UncertaintySetup.unitOf(i.getFeatureName());
+                String[] cells = { name, unit, "", "", "", "" };
+                try {
+                    var engine = UncertaintySetup.engineInputOf(i);
+                    cells[2] = engine.distribution().describe();
+                    cells[3] = Numbers.format(engine.p10(), 3);
+                    cells[4] = Numbers.format(engine.p50(), 3);
+                    cells[5] = Numbers.format(engine.p90(), 3);
+                } catch (RuntimeException e) {
+                    cells[2] = e.getMessage();
                 }
+                item.setText(cells);
             }
-        });
-        for (int i = 0; i < 3; i++) {
-            int index = i;
-            column(Messages.bind(Messages.Uncertainty_parameter, "abc".charAt(i)), 80,
-                    p -> index < p.kind().parameterCount() ? Numbers.format(p.value(index)) : "",
-                    new EditingSupport(inputs) {
-                        private final TextCellEditor editor = new TextCellEditor(inputs.getTable(), SWT.RIGHT);
-
-                        @Override
-                        protected CellEditor getCellEditor(Object element) {
-                            return editor;
-                        }
-
-                        @Override
-                        protected boolean canEdit(Object element) {
-                            return index < ((UncertainParameter) element).kind().parameterCount();
-                        }
-
-                        @Override
-                        protected Object getValue(Object element) {
-                            return Numbers.format(((UncertainParameter) element).value(index));
-                        }
-
-                        @Override
-                        protected void setValue(Object element, Object value) {
-                            double v = Numbers.parse(String.valueOf(value));
-                            if (Double.isNaN(v)) {
-                                status.setText(Messages.bind(Messages.Uncertainty_badNumber,
-                                        ((UncertainParameter) element).name(), value));
-                                return;
-                            }
-                            ((UncertainParameter) element).setValue(index, v);
-                            inputs.update(element, null);
-                        }
-                    });
         }
+        for (TableColumn c : inputs.getColumns()) {
+            c.pack();
+        }
+        boolean none = s == null || s.getInputs().isEmpty();
+        suggest.setVisible(document != null && none);
+        ((GridData) suggestLayout()).exclude = !(document != null && none);
+        settings.setText(s == null ? Messages.Uncertainty_noSettings
+                : Messages.bind(Messages.Uncertainty_settings, s.getRunCount(), s.getSeed(), Labels.of(s.getSamplingMethod())));
+        settings.getParent().layout(true);
     }
 
-    private interface Text {
-        String of(UncertainParameter p);
-    }
-
-    private void column(String header, int width, Text text, EditingSupport editing) {
-        TableViewerColumn c = new TableViewerColumn(inputs, SWT.LEFT);
-        c.getColumn().setText(header);
-        c.getColumn().setWidth(width);
-        c.setLabelProvider(new ColumnLabelProvider() {
-            @Override
-            public String getText(Object element) {
-                return text.of((UncertainParameter) element);
-            }
-        });
-        if (editing != null) {
-            c.setEditingSupport(editing);
+    private Object suggestLayout() {
+        if (suggest.getLayoutData() == null) {
+            suggest.setLayoutData(new GridData());
         }
+        return suggest.getLayoutData();
     }
 
     @Override
     protected void showDocument(ProjectDocument documentOrNull) {
+        if (document != null) {
+            document.removeListener(modelListener);
+        }
         document = documentOrNull;
-        Session s = session();
-        inputs.setInput(s == null ? List.of() : s.parameters);
+        if (document != null) {
+            document.addListener(modelListener);
+        }
+        showInputs();
         showSession();
     }
 
@@ -249,14 +244,7 @@ public final class UncertaintyView extends DocumentView {
     }
 
     private Session session() {
-        if (document == null) {
-            return null;
-        }
-        return sessions.computeIfAbsent(document, d -> {
-            Session s = new Session();
-            s.parameters = new ArrayList<>(UncertaintySetup.defaults(d.project()));
-            return s;
-        });
+        return document == null ? null : sessions.computeIfAbsent(document, d -> new Session());
     }
 
     /** Starts a simulation of the active project with the inputs shown. */
@@ -266,9 +254,10 @@ public final class UncertaintyView extends DocumentView {
             return;
         }
         UncertaintyJob job;
+        SimulationSettings settings;
         try {
-            var study = UncertaintySetup.study(document.project(), s.parameters);
-            SimulationSettings settings = SimulationSettings.defaults().withRunCount(runs.getSelection());
+            var study = UncertaintySetup.study(document.project());
+            settings = UncertaintySetup.settings(document.project().getUncertainty());
             Session mine = s;
             job = new UncertaintyJob(study, settings, getDisplay(), new UncertaintyJob.Listener() {
                 @Override
@@ -298,7 +287,7 @@ public final class UncertaintyView extends DocumentView {
         s.result = null;
         s.failure = null;
         s.done = 0;
-        s.total = runs.getSelection();
+        s.total = settings.runCount();
         job.schedule();
         showSession();
     }
@@ -319,7 +308,9 @@ public final class UncertaintyView extends DocumentView {
     private void showSession() {
         Session s = session();
         boolean busy = running(s);
-        run.setEnabled(s != null && !busy);
+        boolean hasInputs = document != null && document.project().getUncertainty() != null
+                && !document.project().getUncertainty().getInputs().isEmpty();
+        run.setEnabled(s != null && !busy && hasInputs);
         cancel.setEnabled(busy);
         progress.setMaximum(Math.max(1, s == null ? 1 : s.total));
         progress.setSelection(s == null ? 0 : s.done);
@@ -381,12 +372,6 @@ public final class UncertaintyView extends DocumentView {
                         OutputStatistics.PERCENTILE_DEFINITION }));
     }
 
-    /** The inputs shown for the active document (tests). */
-    public List<UncertainParameter> parameters() {
-        Session s = session();
-        return s == null ? List.of() : s.parameters;
-    }
-
     /** The latest result for the active document, or null (tests). */
     public UncertaintyResult result() {
         Session s = session();
@@ -397,11 +382,6 @@ public final class UncertaintyView extends DocumentView {
     public UncertaintyJob job() {
         Session s = session();
         return s == null ? null : s.job;
-    }
-
-    /** The runs spinner (tests). */
-    public Spinner runsSpinner() {
-        return runs;
     }
 
     /** The status line's text (tests). */
