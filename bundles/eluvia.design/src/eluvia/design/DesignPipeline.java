@@ -35,6 +35,7 @@ import eluvia.site.validation.Severity;
 import eluvia.site.validation.SiteValidator;
 import eluvia.transport.CleanupCriterion;
 import eluvia.transport.FlushingPushDown;
+import eluvia.transport.FluxLimit;
 import eluvia.transport.PoreVolumeResult;
 import eluvia.transport.TransportInputException;
 import eluvia.zone.BlockEstimate;
@@ -265,12 +266,13 @@ public final class DesignPipeline {
         double calendarDays = operatingDays * 7.0 / design.getOperatingDaysPerWeek();
         double applied = pv * onePv;
         double captured = applied * design.getCaptureEfficiency();
-        if (!Double.isNaN(layer.saturatedConductivityMetresPerDay())
-                && design.getDarcyFluxMetresPerDay() > layer.saturatedConductivityMetresPerDay()) {
-            notes.add("The Darcy flux " + design.getDarcyFluxMetresPerDay()
-                    + " m/d exceeds the saturated hydraulic conductivity of the column ("
-                    + String.format(Locale.ROOT, "%.3g", layer.saturatedConductivityMetresPerDay())
-                    + " m/d, harmonic mean): the soil cannot take this flux under a unit gradient; lower the flux.");
+        if (Double.isFinite(layer.saturatedConductivityMetresPerDay()) && layer.saturatedConductivityMetresPerDay() > 0) {
+            FluxLimit.Check flux = FluxLimit.check(design.getDarcyFluxMetresPerDay(),
+                    layer.saturatedConductivityMetresPerDay());
+            if (flux.status() != FluxLimit.Status.WITHIN) {
+                notes.add("Flux check against the column's saturated hydraulic conductivity (harmonic mean of the "
+                        + "layers): " + flux.message() + ".");
+            }
         }
         FlushingQuantities quantities = null;
         List<BelowLayerPush> push = new ArrayList<>();

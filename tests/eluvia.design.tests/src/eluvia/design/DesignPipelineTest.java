@@ -87,6 +87,20 @@ final class DesignPipelineTest {
     }
 
     @Test
+    void aFluxAboveTheConductivityIsFlagged() {
+        // unit-gradient infiltration carries at most Ks (Darcy's law with a unit gradient; common practice):
+        // 2 m/d applied to a column of Ks = 1 m/d is flagged, 0.05 m/d is not
+        Project p = TestProjects.singleLayer(0.2, 1, ComplianceCriterion.EFFLUENT);
+        p.getFlushingDesigns().get(0).setDarcyFluxMetresPerDay(2);
+        FlushingDesignResult r = DesignPipeline.run(p).flushing().get(0);
+        assertTrue(r.notes().stream().anyMatch(n -> n.startsWith("Flux check") && n.contains("2.000 m/day is 2.00 times Ks")),
+                r.notes().toString());
+        FlushingDesignResult ok = DesignPipeline.run(TestProjects.singleLayer(0.2, 1, ComplianceCriterion.EFFLUENT))
+                .flushing().get(0);
+        assertFalse(ok.notes().stream().anyMatch(n -> n.startsWith("Flux check")), ok.notes().toString());
+    }
+
+    @Test
     void layerCombinationKeepsWaterAndSorptionCapacity() {
         SoilLayer a = TestProjects.layer("a", 0, 1, 1500, 0.40, 0.30, 0.010, 2.0, 0.1);
         SoilLayer b = TestProjects.layer("b", 1, 4, 1700, 0.30, 0.20, 0.001, 0.5, 0.4);
