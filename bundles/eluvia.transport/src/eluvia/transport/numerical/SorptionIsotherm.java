@@ -11,9 +11,10 @@ import eluvia.transport.TransportInputException;
  * <ul>
  * <li>linear, S = Kd C, with the distribution coefficient Kd in L/kg (Kd = Koc foc, Karickhoff,
  * Brown and Scott 1979);</li>
- * <li>Freundlich, S = Kf C<sup>n</sup>, Kf in (mg/kg)/(mg/L)<sup>n</sup>, exponent n dimensionless;</li>
- * <li>Langmuir, S = Smax K C / (1 + K C), capacity Smax in mg/kg, affinity K in L/mg; at low
- * concentration it tends to the linear form with Kd = Smax K.</li>
+ * <li>Freundlich (Freundlich 1909), S = Kf C<sup>n</sup>, Kf in (mg/kg)/(mg/L)<sup>n</sup>,
+ * exponent n dimensionless;</li>
+ * <li>Langmuir (Langmuir 1918), S = Smax K C / (1 + K C), capacity Smax in mg/kg, affinity K in
+ * L/mg; at low concentration it tends to the linear form with Kd = Smax K.</li>
  * </ul>
  * For negative arguments (the small undershoots a second-order scheme may make next to a front)
  * every form is extended as an odd function, S(-C) = -S(C), so that mass stays balanced.
