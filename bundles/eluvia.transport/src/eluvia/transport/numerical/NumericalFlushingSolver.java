@@ -58,6 +58,11 @@ public final class NumericalFlushingSolver {
     /** Local error of BDF2 over the difference to the quadratic predictor (constant steps). */
     private static final double BDF2_ERROR_CONSTANT = 2.0 / 11.0;
 
+    // Units of the per-cell arrays and fields below: q m/day; inflow and concentrations mg/L;
+    // dz and depth m; thetaM, thetaIm water contents (dimensionless); rhoM, rhoIm, rhoB bulk
+    // densities in kg/L (sites in the mobile region, in the immobile one, all); muW, muS, alpha
+    // 1/day; stored amounts m, mim in mg per litre of bulk soil; lo, dg, up, src0 in 1/day
+    // (times mg/L for src0), the transport operator per unit cell length.
     private final FlushingColumn column;
     private final SolverSettings settings;
     private final int n;
