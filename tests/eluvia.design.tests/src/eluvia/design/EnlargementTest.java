@@ -137,7 +137,8 @@ final class EnlargementTest {
                 s.horizontalDispersionSquareMetresPerDay(), s.horizontalDispersionSquareMetresPerDay(),
                 s.verticalDispersionSquareMetresPerDay(), s.retardation(), s.poreWaterVelocityMetresPerDay());
         double expected = reference.extentAbove(0.05, 10 * 365.25).measure();
-        assertEquals(expected, point.volumeAboveLevelCubicMetres(), 2e-3 * expected);
+        // the grid's error falls as (cell size)^1.5 and was 1.4e-4 at the default 200 cells (DesignSettings)
+        assertEquals(expected, point.volumeAboveLevelCubicMetres(), 5e-4 * expected);
         assertEquals(point.unboundedVolumeCubicMetres(), point.volumeAboveLevelCubicMetres(), 1e-9 * expected);
     }
 }
