@@ -26,6 +26,11 @@ import eluvia.design.EnteredZoneComparison;
 import eluvia.design.ExcavationResult;
 import eluvia.design.FlushingDesignResult;
 import eluvia.design.MethodEstimate;
+import eluvia.design.UncertaintyAnalysis;
+import eluvia.design.UncertaintyHeadline;
+import eluvia.design.UncertaintyResults;
+import eluvia.design.uncertainty.InputSummary;
+import eluvia.design.uncertainty.OutputStatistics;
 import eluvia.design.ZoneAnalysis;
 import eluvia.design.ZoneEnlargement;
 import eluvia.report.chart.BarChart;
@@ -89,6 +94,9 @@ public final class DesignReport {
             + "package and accept responsibility for the design based on it.";
 
     private static final int SIG = 4;
+    /** The outcome words of a verification row. */
+    public static final String PASSED = "passed";
+    public static final String FAILED = "FAILED";
 
     private DesignReport() {
     }
@@ -122,7 +130,7 @@ public final class DesignReport {
         inputs(d, project, run, flushing);
         d.section(Section.of(METHODS, 1, Paragraph.of("Each result rests on the published method listed here. Where "
                 + "a method has no published source the table says so."), Methods.table()));
-        results(d, project, run, flushing);
+        results(d, project, run, flushing, options);
         costs(d, alternatives, run);
         verificationSection(d, verification);
         reproduce(d, run, projectSha256, meta.productVersion());
@@ -297,7 +305,8 @@ public final class DesignReport {
 
     // ---------------------------------------------------------------- results
 
-    private static void results(Document.Builder d, Project p, DesignRun run, List<FlushingDesignResult> flushing) {
+    private static void results(Document.Builder d, Project p, DesignRun run, List<FlushingDesignResult> flushing,
+            PackageOptions options) {
         d.section(Section.of(RESULTS, 1, Paragraph.of("Results of each flushing design, the zone "
                 + "estimated from the samples, the zone's enlargement by dispersion and the excavation take-offs.")));
         for (FlushingDesignResult r : flushing) {
@@ -308,9 +317,100 @@ public final class DesignReport {
         for (ExcavationResult x : run.excavations()) {
             excavationSection(d, x);
         }
-        d.section(Section.of("Uncertainty", 2, Paragraph.of("This run holds no Monte Carlo realisations, so no P10 / "
-                + "P50 / P90 ranges, histograms or tornado charts are shown; the cost range is the accuracy range of "
-                + "the estimate class (section 6).")));
+        uncertaintySection(d, options.uncertainty(), options);
+    }
+
+    /** The headline quantities drawn as histogram and tornado. */
+    static final List<String> UNCERTAINTY_FIGURE_QUANTITIES = List.of(UncertaintyAnalysis.PORE_VOLUMES,
+            UncertaintyAnalysis.DURATION, UncertaintyAnalysis.PRESENT_VALUE);
+
+    private static void uncertaintySection(Document.Builder d, UncertaintyResults u, PackageOptions options) {
+        if (u == null) {
+            d.section(Section.of("Uncertainty", 2, Paragraph.of("The uncertainty analysis was not run for this package, "
+                    + "so no P10 / P50 / P90 ranges, histograms or tornado charts are shown; the cost range is the "
+                    + "accuracy range of the estimate class (section 6).")));
+            return;
+        }
+        List<Block> b = new ArrayList<>();
+        b.add(Paragraph.of("Monte Carlo over the uncertain inputs of the project: " + u.completedRunCount() + " of "
+                + u.requestedRunCount() + " runs completed, " + u.failedRunCount() + " failed"
+                + (u.cancelled() ? "; the analysis was cancelled before every run was made" : "") + ". Each run copies "
+                + "the project, sets the sampled inputs and runs the whole pipeline. Percentiles: "
+                + OutputStatistics.PERCENTILE_DEFINITION));
+        Table.Builder in = Table.with(Column.text("Input (unit)"), Column.text("Distribution"),
+                Column.number("P10", "input unit"), Column.number("P50", "input unit"), Column.number("P90", "input unit"));
+        for (InputSummary i : u.inputs()) {
+            in.row(i.name() + " (" + unit(i.unit()) + ")", i.distribution(), num(i.p10()), num(i.p50()), num(i.p90()));
+        }
+        b.add(in.caption("Uncertain inputs.").build());
+        Table.Builder h = Table.with(Column.text("Figure (unit)"), Column.number("Base", "figure unit"),
+                Column.number("P10", "figure unit"), Column.number("P50", "figure unit"),
+                Column.number("P90", "figure unit"), Column.number("Mean", "figure unit"));
+        List<UncertaintyHeadline> shown = u.headlines().stream()
+                .filter(x -> x.subjectName().isEmpty() || options.reports(x.subjectName())
+                        || !x.subjectKind().equals(UncertaintyAnalysis.FLUSHING_DESIGN)
+                                && !x.subjectKind().equals(UncertaintyAnalysis.ALTERNATIVE))
+                .toList();
+        for (UncertaintyHeadline x : shown) {
+            OutputStatistics st = x.statistics();
+            h.row(headlineName(x) + " (" + unit(x.unit()) + ")", num(x.baseValue()), st == null ? "" : num(st.p10()),
+                    st == null ? "" : num(st.p50()), st == null ? "" : num(st.p90()), st == null ? "" : num(st.mean()));
+        }
+        b.add(h.caption("Headline figures: the deterministic design run (base) and their spread over the runs.").build());
+        d.section(new Section("Uncertainty", 2, b));
+        int n = 0;
+        for (UncertaintyHeadline x : shown) {
+            if (!UNCERTAINTY_FIGURE_QUANTITIES.contains(x.quantity()) || x.statistics() == null) {
+                continue;
+            }
+            List<Block> f = new ArrayList<>();
+            double[] samples = u.simulation().runs().completedOutputValues(x.outputName());
+            OutputStatistics st = x.statistics();
+            n++;
+            if (samples.length > 0 && java.util.Arrays.stream(samples).allMatch(Double::isFinite)) {
+                int bins = Math.max(1, Math.min(eluvia.report.chart.Histogram.MAX_BINS,
+                        (int) Math.ceil(Math.log(samples.length) / Math.log(2)) + 1));
+                f.add(new Figure(ResultFigures.id("histogram-" + n, x.outputName()), new eluvia.report.chart.Histogram("",
+                        new eluvia.report.chart.Axis(capitalised(x.quantity()), unit(x.unit())), samples, bins,
+                        List.of(new eluvia.report.chart.Marker(st.p10(), "P10"), new eluvia.report.chart.Marker(st.p50(), "P50"),
+                                new eluvia.report.chart.Marker(st.p90(), "P90"))),
+                        "Spread of " + headlineName(x) + " over " + samples.length + " completed runs (" + bins
+                                + " bins by Sturges' rule), with P10, P50 and P90."));
+            }
+            eluvia.design.uncertainty.Tornado t = x.tornado();
+            if (t != null && Double.isFinite(t.baseOutputValue())) {
+                List<eluvia.report.chart.TornadoBar> bars = new ArrayList<>();
+                for (eluvia.design.uncertainty.TornadoBar bar : t.bars()) {
+                    if (Double.isFinite(bar.outputAtLowInput()) && Double.isFinite(bar.outputAtHighInput())) {
+                        bars.add(new eluvia.report.chart.TornadoBar(bar.inputName(),
+                                num(bar.lowInputValue()) + " " + unit(bar.inputUnit()),
+                                num(bar.highInputValue()) + " " + unit(bar.inputUnit()), bar.outputAtLowInput(),
+                                bar.outputAtHighInput()));
+                    }
+                }
+                if (!bars.isEmpty()) {
+                    f.add(new Figure(ResultFigures.id("tornado-" + n, x.outputName()), new eluvia.report.chart.Tornado("",
+                            new eluvia.report.chart.Axis(capitalised(x.quantity()), unit(x.unit())), t.baseOutputValue(),
+                            bars), "Sensitivity of " + headlineName(x) + ": each input alone at its P10 and P90, the "
+                                    + "others at their base values."));
+                }
+            }
+            if (!f.isEmpty()) {
+                d.section(new Section("Uncertainty of " + headlineName(x), 3, f));
+            }
+        }
+    }
+
+    private static String headlineName(UncertaintyHeadline x) {
+        return x.quantity() + (x.subjectName().isEmpty() ? "" : ", " + x.subjectName());
+    }
+
+    private static String unit(String u) {
+        return u == null || u.isBlank() || u.equals("1") ? Column.DIMENSIONLESS : u;
+    }
+
+    private static String capitalised(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     private static void flushingSection(Document.Builder d, FlushingDesignResult r, DesignRun run) {
@@ -596,22 +696,23 @@ public final class DesignReport {
      * the tolerance.
      */
     public static List<Table> verificationTables(VerificationAppendix.Outcome v) {
-        Table.Builder t = Table.with(Column.text("No."), Column.text("Case"), Column.number("Reference", "case unit"),
+        Table.Builder t = Table.with(Column.text("Case"), Column.number("Reference", "case unit"),
                 Column.number("Computed", "case unit"), Column.number("Difference", "case unit"),
-                Column.number("Tolerance", "case unit"), Column.text("Result"));
-        Table.Builder s = Table.with(Column.text("No."), Column.text("Source of the reference"),
+                Column.number("Tolerance", "case unit"), Column.text("Outcome"));
+        Table.Builder s = Table.with(Column.text("Case"), Column.text("Source of the reference"),
                 Column.text("Basis of the tolerance"));
         int n = 0;
         for (VerificationAppendix.Row r : v.rows()) {
             VerificationAppendix.Case c = r.verificationCase();
             String no = "V" + ++n;
-            t.row(no, c.name() + " (unit: " + c.unit() + ")", InputTables.number(c.referenceValue()),
-                    r.error().isEmpty() ? sig(r.computedValue(), 7) : "error: " + r.error(), sig(r.difference(), 2),
-                    sig(c.tolerance(), 2), r.passed() ? "pass" : "FAIL");
-            s.row(no, c.source(), c.toleranceBasis());
+            t.row(no + ": " + c.name() + " (unit: " + c.unit() + ")", sig(c.referenceValue(), 8),
+                    r.error().isEmpty() ? sig(r.computedValue(), 8) : "error: " + r.error(), sig(r.difference(), 2),
+                    sig(c.tolerance(), 2), r.passed() ? PASSED : FAILED);
+            s.row("Case " + no, c.source(), c.toleranceBasis());
         }
         return List.of(t.caption("Verification cases run for this package; values in the unit of each case (\"-\" "
-                + "for dimensionless). A case passes when |difference| is at most its tolerance.").build(),
+                + "for dimensionless); reference and computed values to 8 significant figures. A case passes when "
+                + "|difference| is at most its tolerance.").build(),
                 s.caption("Sources of the reference values and bases of the tolerances.").build());
     }
 

@@ -3,6 +3,8 @@ package eluvia.report;
 import java.util.List;
 import java.util.Set;
 
+import eluvia.design.UncertaintyResults;
+
 /**
  * What a design package contains beyond its fixed parts.
  *
@@ -11,8 +13,11 @@ import java.util.Set;
  *        or null for all of them
  * @param verificationCases the verification cases to run (null for
  *        {@link VerificationAppendix#standardCases()}); set only through {@link #withVerificationCases}
+ * @param uncertainty the Monte Carlo results of the same project and settings to report (P10 / P50 /
+ *        P90, histograms, tornado charts), or null when the analysis was not run
  */
-public record PackageOptions(boolean writePdf, Set<String> alternatives, List<VerificationAppendix.Case> verificationCases) {
+public record PackageOptions(boolean writePdf, Set<String> alternatives, List<VerificationAppendix.Case> verificationCases,
+        UncertaintyResults uncertainty) {
 
     /** Copies the collections. */
     public PackageOptions {
@@ -22,12 +27,12 @@ public record PackageOptions(boolean writePdf, Set<String> alternatives, List<Ve
 
     /** Everything: the PDF and every alternative, with the standard verification cases. */
     public static PackageOptions defaults() {
-        return new PackageOptions(true, null, null);
+        return new PackageOptions(true, null, null, null);
     }
 
     /** The same options with or without the PDF. */
     public PackageOptions withPdf(boolean pdf) {
-        return new PackageOptions(pdf, alternatives, verificationCases);
+        return new PackageOptions(pdf, alternatives, verificationCases, uncertainty);
     }
 
     /** The same options reporting only the alternatives (and flushing designs) of these names. */
@@ -36,12 +41,20 @@ public record PackageOptions(boolean writePdf, Set<String> alternatives, List<Ve
             throw new IllegalArgumentException("alternatives to report are " + (names == null ? "missing (null)" : "empty")
                     + "; allowed: at least one name (use defaults() for all alternatives)");
         }
-        return new PackageOptions(writePdf, names, verificationCases);
+        return new PackageOptions(writePdf, names, verificationCases, uncertainty);
     }
 
     /** The same options with other verification cases: for testing how a failing case is reported. */
     PackageOptions withVerificationCases(List<VerificationAppendix.Case> cases) {
-        return new PackageOptions(writePdf, alternatives, cases);
+        return new PackageOptions(writePdf, alternatives, cases, uncertainty);
+    }
+
+    /**
+     * The same options reporting these uncertainty results (from
+     * {@code UncertaintyAnalysis.run} on the same project with the same design settings).
+     */
+    public PackageOptions withUncertainty(UncertaintyResults results) {
+        return new PackageOptions(writePdf, alternatives, verificationCases, results);
     }
 
     /** Whether an alternative or design of this name is reported. */

@@ -64,9 +64,9 @@ final class VerificationAppendixTest {
         assertFalse(o.passed());
         assertEquals(2, o.failures().size());
         Table t = DesignReport.verificationTables(o).get(0);
-        assertEquals("FAIL", t.rows().get(0).get(6));
-        assertEquals("FAIL", t.rows().get(10).get(6));
-        assertEquals("pass", t.rows().get(1).get(6));
+        assertEquals(DesignReport.FAILED, t.rows().get(0).get(5));
+        assertEquals(DesignReport.FAILED, t.rows().get(10).get(5));
+        assertEquals(DesignReport.PASSED, t.rows().get(1).get(5));
     }
 
     @Test
