@@ -56,6 +56,10 @@ import eluvia.site.model.UncertaintySettings;
  * is never dropped silently. The same seed gives the same results with any number of threads.
  * Progress and cancellation go through the {@link ProgressSink}; a run already in the pipeline when
  * the sink cancels stops at the pipeline's next check and is counted as failed ("cancelled").
+ *
+ * <p>The runs use the caller's {@link DesignSettings} except that the push-down below the treated
+ * column ({@link DesignSettings#pushDownBelowColumn()}) is switched off: it is not a headline
+ * figure here and takes most of a run's time.
  */
 public final class UncertaintyAnalysis {
 
@@ -157,7 +161,8 @@ public final class UncertaintyAnalysis {
         if (designSettings == null) {
             throw new UncertaintyInputException("design settings", "null", "settings: pass DesignSettings.defaults()");
         }
-        DesignSettings pipelineSettings = designSettings;
+        // the push-down below the treated column is no headline here and costs most of a run: leave it out
+        DesignSettings pipelineSettings = designSettings.toBuilder().pushDownBelowColumn(false).build();
         ProgressSink sink = progress == null ? ProgressSink.NONE : progress;
         SimulationSettings settings = override != null ? override : settingsOf(project);
 

@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
 /**
  * The headless command line: {@code demo}, {@code design}, {@code check} and {@code flush}.
  *
- * Commands: {@code demo}, {@code design}, {@code check}, {@code flush} and {@code fit}.
+ * Commands: {@code demo}, {@code design}, {@code check}, {@code flush}, {@code fit} and {@code uncertainty}.
  *
  * <p>Exit codes: 0 success; 1 the project is not valid (its problems are printed, one a line);
  * 2 a bad command-line option or value (the message names the option and the allowed range);
@@ -18,7 +18,8 @@ import picocli.CommandLine.Command;
 @Command(name = "eluvia", mixinStandardHelpOptions = true, versionProvider = EluviaCommand.Version.class,
         description = { "Eluvia: soil flushing and excavation design estimates.",
                 "Results are planning estimates; a licensed professional engineer must review them." },
-        subcommands = { DemoCommand.class, DesignCommand.class, CheckCommand.class, FlushCommand.class, FitCommand.class },
+        subcommands = { DemoCommand.class, DesignCommand.class, CheckCommand.class, FlushCommand.class, FitCommand.class,
+                UncertaintyCommand.class },
         synopsisSubcommandLabel = "COMMAND")
 public final class EluviaCommand implements Callable<Integer> {
 

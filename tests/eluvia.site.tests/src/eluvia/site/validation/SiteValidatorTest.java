@@ -373,7 +373,7 @@ final class SiteValidatorTest {
                         "not empty"),
                 // Uncertainty (ranges: what a distribution needs to be defined, and the Monte Carlo engine's limits)
                 error("too few Monte Carlo runs", p -> uncertainty(p).setRunCount(1), p -> uncertainty(p), "runCount", "1", "2 to 10000000"),
-                warning("uncertainty on without inputs", p -> { uncertainty(p).getRankCorrelations().clear(); uncertainty(p).getInputs().clear(); },
+                warning("uncertainty on without inputs", p -> { uncertainty(p).getRankCorrelations().clear(); uncertainty(p).getInputs().clear(); uncertainty(p).setEnabled(true); },
                         p -> uncertainty(p), "enabled", "true", "at least one uncertain input"),
                 error("duplicate uncertain input names", p -> uncertain(p, 1).setName(uncertain(p, 0).getName().toUpperCase()),
                         p -> uncertain(p, 1), "name", "'" + TestProjects.example().getUncertainty().getInputs().get(0).getName().toUpperCase() + "'",
