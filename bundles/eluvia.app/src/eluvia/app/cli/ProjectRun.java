@@ -101,5 +101,37 @@ final class ProjectRun {
                 out.printf(java.util.Locale.ROOT, "  water to capture, treat   %.4g m3%n", r.waterCapturedCubicMetres());
             }
         }
+        var zone = run.zoneAnalysis();
+        if (zone != null && zone.available() && zone.exceedance() != null) {
+            out.println();
+            out.printf(java.util.Locale.ROOT, "Soil above the cleanup level (from the samples, %s): %.4g m3%n",
+                    zone.estimator().label(), zone.exceedance().volumeCubicMetres());
+        }
+        for (var e : run.enlargements()) {
+            if (!e.available() || e.envelope().isEmpty()) {
+                continue;
+            }
+            var last = e.envelope().get(e.envelope().size() - 1);
+            out.printf(java.util.Locale.ROOT, "Zone '%s' grows by dispersion from %.4g m3 to %.4g m3 (x%.3g) if the remedy waits %.3g years%n",
+                    e.zoneName(), e.sourceVolumeCubicMetres(), last.volumeAboveLevelCubicMetres(), last.ratio(),
+                    last.delayYears());
+        }
+        if (!run.alternatives().isEmpty()) {
+            out.println();
+            out.println("Alternatives (present value, accuracy range):");
+            for (var a : run.alternatives()) {
+                if (!a.available() || a.estimate() == null) {
+                    out.printf(java.util.Locale.ROOT, "  %-40s not available: %s%n", a.name(), a.unavailableReason());
+                    continue;
+                }
+                var est = a.estimate();
+                out.printf(java.util.Locale.ROOT, "  %-40s %,.0f %s (%,.0f to %,.0f)%s%n", a.name(), est.presentValue().amount(),
+                        est.currency(), est.presentValueLow().amount(), est.presentValueHigh().amount(),
+                        a.inventedRates() ? "  [INVENTED example rates]" : "");
+            }
+            if (run.lowestPresentValue() != null) {
+                out.println("  lowest present value: " + run.lowestPresentValue());
+            }
+        }
     }
 }
