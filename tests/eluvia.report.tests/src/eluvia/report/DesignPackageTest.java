@@ -29,6 +29,8 @@ import org.junit.jupiter.api.io.TempDir;
 import com.lowagie.text.pdf.PdfReader;
 import com.lowagie.text.pdf.parser.PdfTextExtractor;
 
+import eluvia.cost.LineItem;
+import eluvia.design.AlternativeResult;
 import eluvia.design.Cautions;
 import eluvia.design.FlushingDesignResult;
 import eluvia.report.document.Document;
@@ -144,6 +146,30 @@ final class DesignPackageTest {
         BigDecimal v = new BigDecimal(jsonNumber).round(new MathContext(4));
         int digitsBeforePoint = v.precision() - v.scale();
         return v.setScale(Math.max(0, 4 - digitsBeforePoint)).toPlainString();
+    }
+
+    @Test
+    void resultsJsonHoldsTheWholeJobAndEveryCostLineIsTraceable() {
+        assertTrue(json.contains("\"formatVersion\": " + ResultsJson.FORMAT_VERSION));
+        for (String key : List.of("\"settings\"", "\"zoneAnalysis\"", "\"enlargement\"", "\"excavations\"",
+                "\"alternatives\"", "\"costOfDelay\"", "\"governingMethod\"", "\"quantitySource\"")) {
+            assertTrue(json.contains(key), "results.json lacks " + key);
+        }
+        for (AlternativeResult a : ExampleRun.RUN.alternatives()) {
+            assertTrue(json.contains("\"name\": \"" + a.name() + "\""), a.name());
+            if (!a.available()) {
+                continue;
+            }
+            // results.json holds the run's present value itself (formatted by the same writer): the file is the run
+            String pv = new Json().beginObject().field("presentValue", a.estimate().presentValue().amount()).endObject()
+                    .toString().trim();
+            assertTrue(json.contains(pv.substring(1, pv.length() - 1).trim()), a.name() + ": " + pv);
+            for (LineItem line : a.estimate().lines()) {
+                // every line's quantity is one of the alternative's, and its name and source are written beside it
+                assertTrue(a.quantities().contains(line.quantity().name()), line.quantity().name());
+                assertTrue(json.contains("\"quantity\": \"" + line.quantity().name() + "\""), line.quantity().name());
+            }
+        }
     }
 
     @Test
