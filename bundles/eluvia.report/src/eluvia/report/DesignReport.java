@@ -36,6 +36,7 @@ import eluvia.design.ZoneEnlargement;
 import eluvia.report.chart.BarChart;
 import eluvia.report.chart.LineChart;
 import eluvia.report.chart.PlanView;
+import eluvia.report.chart.SectionView;
 import eluvia.report.content.InputTables;
 import eluvia.report.content.Methods;
 import eluvia.report.content.ResultFigures;
@@ -313,7 +314,7 @@ public final class DesignReport {
             flushingSection(d, r, run);
         }
         zoneSection(d, p, run.zoneAnalysis());
-        enlargementSection(d, run.enlargements());
+        enlargementSection(d, p, run.enlargements());
         for (ExcavationResult x : run.excavations()) {
             excavationSection(d, x);
         }
@@ -510,7 +511,7 @@ public final class DesignReport {
         d.section(new Section("Zone from the samples", 2, b));
     }
 
-    private static void enlargementSection(Document.Builder d, List<ZoneEnlargement> enlargements) {
+    private static void enlargementSection(Document.Builder d, Project project, List<ZoneEnlargement> enlargements) {
         List<Block> b = new ArrayList<>();
         b.add(Paragraph.of("While nothing is done the zone enlarges by dispersion: " + ZoneEnlargement.METHOD + "."));
         for (ZoneEnlargement z : enlargements) {
@@ -529,6 +530,13 @@ public final class DesignReport {
             }
             b.add(t.caption("Zone " + z.zoneName() + " (source " + num(z.sourceVolumeCubicMetres()) + " m\u00b3, "
                     + z.sourceBasis() + "): envelope over its contaminants after each delay; depths below ground.").build());
+            SectionView section = ResultFigures.section(project, z);
+            if (section != null) {
+                b.add(new Figure(ResultFigures.id("section", z.zoneName()), section, "Section through zone " + z.zoneName()
+                        + " along easting: the zone as entered and the soil above the cleanup level after each delay "
+                        + "(widened by the plan growth on each side, between the top and bottom depths found), layer "
+                        + "bases as lines; vertical exaggeration " + InputTables.number(section.verticalExaggeration()) + "."));
+            }
             if (!z.notes().isEmpty()) {
                 b.add(new BulletList(z.notes().stream().map(Paragraph::of).toList()));
             }

@@ -99,6 +99,7 @@ final class DesignPackageTest {
         }
         assertTrue(d.figures().stream().anyMatch(f -> f.id().startsWith("plan-")));
         assertTrue(d.figures().stream().anyMatch(f -> f.id().equals("enlargement")));
+        assertTrue(d.figures().stream().anyMatch(f -> f.id().startsWith("section-")));
         assertTrue(d.figures().stream().anyMatch(f -> f.id().startsWith("cost-")));
     }
 

@@ -15,7 +15,13 @@ import eluvia.design.ContaminantFlushing;
 import eluvia.design.FlushingDesignResult;
 import eluvia.report.chart.BarChart;
 import eluvia.report.chart.LineChart;
+import eluvia.report.chart.Outline;
+import eluvia.report.chart.SectionView;
 import eluvia.report.chart.XySeries;
+import eluvia.design.EnlargementPoint;
+import eluvia.design.ZoneEnlargement;
+import eluvia.site.model.TreatmentZone;
+import eluvia.site.model.Vertex;
 import eluvia.report.content.ResultFigures;
 
 /** The chart data shows the results the pipeline chose, nothing else. */
@@ -67,6 +73,39 @@ final class ResultFiguresTest {
         }
         assertNull(ResultFigures.costBreakdown(ExampleRun.RUN.alternatives(), "XXX"));
         assertNull(ResultFigures.enlargement(List.of()));
+    }
+
+    @Test
+    void sectionShowsTheEnteredZoneAndTheEnlargedOnesToTheirDepths() {
+        for (ZoneEnlargement e : ExampleRun.RUN.enlargements()) {
+            SectionView v = ResultFigures.section(ExampleRun.PROJECT, e);
+            if (!e.available()) {
+                assertNull(v);
+                continue;
+            }
+            TreatmentZone z = ExampleRun.PROJECT.getSite().getZones().stream()
+                    .filter(x -> x.getName().equals(e.zoneName())).findFirst().orElseThrow();
+            double min = z.getFootprint().stream().mapToDouble(Vertex::getEastingMetres).min().orElseThrow();
+            double max = z.getFootprint().stream().mapToDouble(Vertex::getEastingMetres).max().orElseThrow();
+            Outline entered = v.outlines().stream().filter(o -> o.name().endsWith("as entered")).findFirst().orElseThrow();
+            assertEquals(max - min, width(entered), 1e-9);
+            assertEquals(z.getTopDepthMetres(), entered.y()[0], 0.0);
+            assertEquals(z.getBottomDepthMetres(), entered.y()[2], 0.0);
+            for (EnlargementPoint pt : e.envelope()) {
+                if (pt.delayYears() == 0) {
+                    continue;
+                }
+                Outline o = v.outlines().stream().filter(x -> x.name().equals("after "
+                        + eluvia.report.content.InputTables.number(pt.delayYears()) + " yr")).findFirst().orElseThrow();
+                // widened by the plan growth on both sides, between the depths the pipeline found
+                assertEquals(max - min + 2 * pt.planGrowthMetres(), width(o), 1e-9);
+                assertEquals(pt.bottomDepthMetres(), o.y()[2], 0.0);
+            }
+        }
+    }
+
+    private static double width(Outline o) {
+        return o.x()[1] - o.x()[0];
     }
 
     @Test

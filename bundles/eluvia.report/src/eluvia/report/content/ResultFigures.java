@@ -18,6 +18,7 @@ import eluvia.report.chart.LineChart;
 import eluvia.report.chart.Marker;
 import eluvia.report.chart.Outline;
 import eluvia.report.chart.PlanView;
+import eluvia.report.chart.SectionView;
 import eluvia.report.chart.ValuePoint;
 import eluvia.report.chart.XySeries;
 import eluvia.site.model.Contaminant;
@@ -202,6 +203,56 @@ public final class ResultFigures {
         }
         return new PlanView("", new Axis("Easting", "m"), new Axis("Northing", "m"),
                 new Axis(contaminant.getName() + " in soil, highest sample", "mg/kg"), points, outlines, true);
+    }
+
+    /**
+     * Vertical section through a zone along easting: the zone as entered (its footprint's easting
+     * extent, or the side of a square of its area, from its top to its bottom depth) and the zone
+     * above the cleanup level after each delay of the pipeline's enlargement (the source widened by
+     * the plan growth on both sides, from the top to the bottom depth the pipeline found), with the
+     * layer boundaries. Null when the enlargement is not available.
+     */
+    public static SectionView section(Project p, ZoneEnlargement e) {
+        TreatmentZone z = p.getSite().getZones().stream().filter(x -> x.getName().equals(e.zoneName())).findFirst()
+                .orElse(null);
+        if (z == null || !e.available() || e.envelope().isEmpty()) {
+            return null;
+        }
+        double width;
+        if (z.getFootprint().size() >= 3) {
+            double min = z.getFootprint().stream().mapToDouble(Vertex::getEastingMetres).min().orElseThrow();
+            double max = z.getFootprint().stream().mapToDouble(Vertex::getEastingMetres).max().orElseThrow();
+            width = max - min;
+        } else {
+            width = Math.sqrt(z.getEffectiveAreaSquareMetres());
+        }
+        if (!(width > 0)) {
+            return null;
+        }
+        List<Outline> outlines = new ArrayList<>();
+        double growthMax = e.envelope().stream().mapToDouble(EnlargementPoint::planGrowthMetres).max().orElse(0);
+        double left = Math.max(0, growthMax);
+        for (EnlargementPoint pt : e.envelope()) {
+            if (pt.delayYears() == 0 || !(pt.bottomDepthMetres() > pt.topDepthMetres())) {
+                continue;
+            }
+            double g = Math.max(0, pt.planGrowthMetres());
+            outlines.add(rectangle("after " + InputTables.number(pt.delayYears()) + " yr", left - g, left + width + g,
+                    pt.topDepthMetres(), pt.bottomDepthMetres()));
+        }
+        outlines.add(rectangle(z.getName() + " as entered", left, left + width, z.getTopDepthMetres(), z.getBottomDepthMetres()));
+        List<Marker> layers = new ArrayList<>();
+        for (eluvia.site.model.SoilLayer l : p.getSite().getLayers()) {
+            layers.add(new Marker(l.getBottomDepthMetres(), "base of " + l.getName()));
+        }
+        double depth = e.envelope().stream().mapToDouble(EnlargementPoint::bottomDepthMetres).max().orElse(z.getBottomDepthMetres());
+        double exaggeration = Math.max(1, Math.min(10, Math.round((width + 2 * left) / Math.max(depth, 1e-3) / 2)));
+        return new SectionView("", new Axis("Distance along the section (easting)", "m"), new Axis("Depth below ground", "m"),
+                new Axis("Zone", Axis.DIMENSIONLESS), List.of(), outlines, false, exaggeration, layers);
+    }
+
+    private static Outline rectangle(String name, double x0, double x1, double top, double bottom) {
+        return new Outline(name, new double[] { x0, x1, x1, x0 }, new double[] { top, top, bottom, bottom });
     }
 
     private static Outline outline(String name, List<Vertex> vs) {
