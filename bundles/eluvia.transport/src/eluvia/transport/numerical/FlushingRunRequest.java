@@ -66,7 +66,13 @@ public final class FlushingRunRequest {
         return profileTimesDays;
     }
 
-    /** True: stop as soon as every target is met; false: run the full length. */
+    /**
+     * True: stop as soon as every target is met, each having fallen to it during the run (one that
+     * starts below its target, like the effluent of a column with a clean bottom layer, keeps the
+     * run going since it may still rise); false: run the full length. The pore volumes reported are
+     * those of the last fall to the target, so a criterion that rises again and falls later is
+     * reported at its final crossing within the run.
+     */
     public boolean stopWhenTargetsReached() {
         return stopWhenTargetsReached;
     }

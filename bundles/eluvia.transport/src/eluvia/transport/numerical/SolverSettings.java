@@ -14,11 +14,12 @@ import eluvia.transport.TransportInputException;
  * backward differentiation formula (BDF2) is estimated from the difference to a quadratic
  * extrapolation of the last three states (a Milne-type estimate, error ~ (2/11) times that
  * difference), and the step is rejected and retried when the error exceeds
- * {@link #stepTolerance()} times (|C| + the concentration floor) in any cell. Setting the minimum,
- * initial and maximum step equal gives fixed steps.
+ * {@link #stepTolerance()} times (|C| + the larger of the concentration floor and 1 % of the
+ * highest concentration in the profile) in any cell. Setting the minimum, initial and maximum
+ * step equal gives fixed steps.
  *
  * <p>Accuracy of the defaults, measured against the exact finite-layer series: pore volumes to
- * target within 2e-4 to 5.5e-4 (relative) for layer Peclet numbers 1 to 100 and targets 0.01 to
+ * target within 2e-4 to 8e-4 (relative) for layer Peclet numbers 1 to 100 and targets 0.01 to
  * 1e-4. The tolerance bounds each step's local error; the errors of the many small early steps
  * (the inlet front) are damped by the scheme, so the accuracy at the target is mostly set by the
  * later, larger steps. For that reason fixed steps are often as accurate for fewer steps (0.01

@@ -19,8 +19,8 @@ import eluvia.transport.internal.FiniteLayerModel;
 final class FiniteLayerTest {
     /**
      * Defaults: at least 100 cells, cell Peclet number at most 0.25, local step tolerance 1e-5.
-     * Measured while choosing them: relative errors in pore volumes to target of 2e-4 to 5.5e-4
-     * for P = 1, 10 and 100 and targets 0.01 and 1e-4; the tolerance leaves margin.
+     * Measured while choosing them: relative errors in pore volumes to target of 2e-4 to 8e-4
+     * for P = 1, 10 and 100 and targets 0.01 and 1e-4.
      */
     private static final double DEFAULT_ACCURACY = 1e-3;
 
