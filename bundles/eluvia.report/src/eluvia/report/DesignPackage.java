@@ -67,7 +67,7 @@ public final class DesignPackage {
         VerificationAppendix.Outcome verification = VerificationAppendix.run(options.casesToRun());
         List<Path> files = new ArrayList<>();
         Path json = outDir.resolve(RESULTS_JSON);
-        Files.writeString(json, ResultsJson.of(run, sha, productVersion), StandardCharsets.UTF_8);
+        Files.writeString(json, ResultsJson.of(run, sha, productVersion, verification, options.uncertainty()), StandardCharsets.UTF_8);
         files.add(json);
         Document document = DesignReport.build(project, run, sha, productVersion,
                 LocalDate.ofInstant(run.startedAt(), ZoneOffset.UTC), options, verification);

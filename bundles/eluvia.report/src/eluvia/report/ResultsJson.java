@@ -1,5 +1,12 @@
 package eluvia.report;
 
+import eluvia.design.UncertaintyHeadline;
+import eluvia.design.UncertaintyResults;
+import eluvia.design.uncertainty.CheapestAlternative;
+import eluvia.design.uncertainty.InputSummary;
+import eluvia.design.uncertainty.OutputStatistics;
+import eluvia.design.uncertainty.TornadoBar;
+
 import java.util.Map;
 
 import eluvia.cost.AccuracyRange;
@@ -62,6 +69,15 @@ public final class ResultsJson {
 
     /** The JSON text of a run, with the SHA-256 of the project file it came from (may be null). */
     public static String of(DesignRun run, String projectSha256, String productVersion) {
+        return of(run, projectSha256, productVersion, null, null);
+    }
+
+    /**
+     * The JSON text of a run with, when given, the outcome of the verification cases run for the
+     * package and the uncertainty analysis (either may be null).
+     */
+    public static String of(DesignRun run, String projectSha256, String productVersion,
+            VerificationAppendix.Outcome verification, UncertaintyResults uncertainty) {
         Json j = new Json().beginObject();
         j.field("format", "eluvia-results").field("formatVersion", FORMAT_VERSION);
         j.field("project", run.projectName());
@@ -110,6 +126,12 @@ public final class ResultsJson {
         j.name("notes").beginArray();
         run.notes().forEach(j::value);
         j.endArray();
+        if (verification != null) {
+            writeVerification(j, verification);
+        }
+        if (uncertainty != null) {
+            writeUncertainty(j, uncertainty);
+        }
         return j.endObject().toString();
     }
 
@@ -478,5 +500,71 @@ public final class ResultsJson {
         }
         j.endArray();
         j.endObject();
+    }
+
+    private static void writeVerification(Json j, VerificationAppendix.Outcome v) {
+        j.name("verification").beginObject().field("passed", v.passed());
+        j.name("cases").beginArray();
+        for (VerificationAppendix.Row r : v.rows()) {
+            VerificationAppendix.Case c = r.verificationCase();
+            j.beginObject().field("case", c.name()).field("unit", c.unit()).field("reference", c.referenceValue())
+                    .field("source", c.source()).field("computed", r.computedValue()).field("difference", r.difference())
+                    .field("tolerance", c.tolerance()).field("passed", r.passed()).field("error", r.error()).endObject();
+        }
+        j.endArray().endObject();
+    }
+
+    private static void writeUncertainty(Json j, UncertaintyResults u) {
+        j.name("uncertainty").beginObject().field("requestedRuns", u.requestedRunCount())
+                .field("completedRuns", u.completedRunCount()).field("failedRuns", u.failedRunCount())
+                .field("cancelled", u.cancelled())
+                .field("samplingMethod", String.valueOf(u.simulation().settings().samplingMethod()))
+                .field("seed", u.simulation().settings().seed())
+                .field("percentileDefinition", OutputStatistics.PERCENTILE_DEFINITION);
+        j.name("inputs").beginArray();
+        for (InputSummary in : u.inputs()) {
+            j.beginObject().field("name", in.name()).field("unit", in.unit()).field("distribution", in.distribution())
+                    .field("p10", in.p10()).field("p50", in.p50()).field("p90", in.p90()).field("mean", in.mean())
+                    .field("baseValue", in.baseValue()).endObject();
+        }
+        j.endArray().name("headlines").beginArray();
+        for (UncertaintyHeadline h : u.headlines()) {
+            OutputStatistics s = h.statistics();
+            j.beginObject().field("outputName", h.outputName()).field("subjectKind", h.subjectKind())
+                    .field("subjectName", h.subjectName()).field("quantity", h.quantity()).field("unit", h.unit())
+                    .field("deterministic", h.baseValue());
+            if (s != null) {
+                j.field("p10", s.p10()).field("p50", s.p50()).field("p90", s.p90()).field("mean", s.mean())
+                        .field("standardDeviation", s.standardDeviation()).field("min", s.min()).field("max", s.max());
+                if (s.histogram() != null) {
+                    j.name("histogram").beginObject().field("lowerEdge", s.histogram().lowerEdge())
+                            .field("upperEdge", s.histogram().upperEdge()).name("counts").beginArray();
+                    s.histogram().counts().forEach(c -> j.value(c));
+                    j.endArray().endObject();
+                }
+            }
+            if (h.tornado() != null) {
+                j.name("tornado").beginArray();
+                for (TornadoBar b : h.tornado().bars()) {
+                    j.beginObject().field("inputName", b.inputName()).field("lowInputValue", b.lowInputValue())
+                            .field("highInputValue", b.highInputValue()).field("outputAtLowInput", b.outputAtLowInput())
+                            .field("outputAtHighInput", b.outputAtHighInput()).endObject();
+                }
+                j.endArray();
+            }
+            j.endObject();
+        }
+        j.endArray().name("cheapest").beginArray();
+        for (CheapestAlternative c : u.cheapest()) {
+            j.beginObject().field("label", c.label()).name("alternatives").beginArray();
+            for (int i = 0; i < c.outputNames().size(); i++) {
+                j.beginObject().field("output", c.outputNames().get(i)).field("probability", c.probabilities().get(i))
+                        .endObject();
+            }
+            j.endArray().endObject();
+        }
+        j.endArray().name("failureCounts").beginObject();
+        u.failureCounts().forEach((k, v) -> j.field(k, v));
+        j.endObject().endObject();
     }
 }

@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
  *
  * <p>Exit codes: 0 success; 1 the project is not valid (its problems are printed, one a line);
  * 2 a bad command-line option or value (the message names the option and the allowed range);
- * 3 a file could not be read or written.
+ * 3 a file could not be read or written; 4 the solver's verification cases failed (the package says so).
  */
 @Command(name = "eluvia", mixinStandardHelpOptions = true, versionProvider = EluviaCommand.Version.class,
         description = { "Eluvia: soil flushing and excavation design estimates.",
@@ -27,6 +27,7 @@ public final class EluviaCommand implements Callable<Integer> {
     public static final int INVALID_PROJECT = 1;
     public static final int BAD_OPTION = 2;
     public static final int FILE_ERROR = 3;
+    public static final int VERIFICATION_FAILED = 4;
 
     final Environment environment;
 

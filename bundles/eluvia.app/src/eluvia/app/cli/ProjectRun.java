@@ -12,7 +12,12 @@ import eluvia.design.DesignInputException;
 import eluvia.design.DesignPipeline;
 import eluvia.design.DesignRun;
 import eluvia.design.FlushingDesignResult;
+import eluvia.design.UncertaintyAnalysis;
+import eluvia.design.UncertaintyResults;
+import eluvia.design.uncertainty.ProgressSink;
 import eluvia.report.DesignPackage;
+import eluvia.report.PackageOptions;
+import eluvia.report.PackageResult;
 import eluvia.site.files.ProjectFileException;
 import eluvia.site.files.ProjectFiles;
 import eluvia.site.model.Project;
@@ -61,18 +66,47 @@ final class ProjectRun {
             }
             return EluviaCommand.INVALID_PROJECT;
         }
-        List<Path> files;
+        PackageOptions options = PackageOptions.defaults();
+        if (UncertaintyAnalysis.enabled(project)) {
+            err.println("Running the uncertainty analysis of " + name + " (Monte Carlo over the whole pipeline)...");
+            UncertaintyResults u = UncertaintyAnalysis.run(project, null, new ProgressSink() {
+                private int lastTenth = -1;
+
+                @Override
+                public void worked(int done, int total) {
+                    int tenth = total == 0 ? 10 : done * 10 / total;
+                    if (tenth != lastTenth) {
+                        lastTenth = tenth;
+                        err.println("  " + done + " of " + total + " runs");
+                        err.flush();
+                    }
+                }
+
+                @Override
+                public boolean cancelled() {
+                    return false;
+                }
+            });
+            options = options.withUncertainty(u);
+        }
+        PackageResult written;
         try {
-            files = DesignPackage.write(project, run, bytes, Environment.productVersion(), outDir);
+            written = DesignPackage.write(project, run, bytes, Environment.productVersion(), outDir, options);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the design package to " + outDir + ": " + e.getMessage(), e);
         }
+        List<Path> files = written.files();
         printHeadlines(run, out);
         out.println();
         out.println("Design package written to " + outDir + ":");
         files.forEach(f -> out.println("  " + f));
         out.println();
         run.cautions().forEach(c -> out.println("CAUTION: " + c));
+        if (!written.verificationPassed()) {
+            err.println("VERIFICATION FAILED: the solver's verification cases did not all reproduce their reference values;"
+                    + " do not use these results. See the verification appendix of the package.");
+            return EluviaCommand.VERIFICATION_FAILED;
+        }
         return EluviaCommand.OK;
     }
 

@@ -265,4 +265,22 @@ final class CommandLineTest {
         assertEquals(2, bad.code());
         assertTrue(bad.err().contains("--curve"), bad.err());
     }
+
+    @Test
+    void designRecordsTheVerificationAndTheUncertaintyInResultsJson(@TempDir Path dir) throws IOException {
+        String text;
+        try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
+            text = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        }
+        // switch the example's uncertainty analysis on, with few runs to keep the test short
+        text = text.replace("<uncertainty runCount=\"100\"", "<uncertainty enabled=\"true\" runCount=\"12\"");
+        Files.writeString(dir.resolve("mc.eluvia"), text);
+        Result r = run(dir, "design", "mc.eluvia", "--out", "pkg");
+        assertEquals(0, r.code(), r.err());
+        String json = Files.readString(dir.resolve("pkg/results.json"));
+        assertTrue(json.contains("\"verification\": {\n    \"passed\": true"), "verification outcome in results.json");
+        assertTrue(json.contains("\"uncertainty\": {"), "uncertainty section in results.json");
+        assertEquals(12, number(json, "requestedRuns"), 0);
+        assertTrue(Files.isRegularFile(dir.resolve("pkg/design-package.pdf")));
+    }
 }
