@@ -8,15 +8,19 @@ import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.swt.widgets.Display;
 
+import eluvia.design.DesignCancelledException;
 import eluvia.design.DesignInputException;
 import eluvia.design.DesignPipeline;
+import eluvia.design.DesignProgress;
 import eluvia.design.DesignRun;
+import eluvia.design.DesignSettings;
 import eluvia.site.model.Project;
 import eluvia.ui.internal.Messages;
 
 /**
  * Keeps a document's results current: after every change (debounced), runs the design pipeline
- * on a copy of the project in a cancellable Eclipse job and hands the outcome to a consumer on the
+ * on a copy of the project in a cancellable Eclipse job (the pipeline's progress goes to the job's
+ * monitor, the monitor's cancel flag stops the pipeline) and hands the outcome to a consumer on the
  * UI thread. A newer change cancels a run in progress; results of a superseded run are dropped.
  */
 public final class DesignComputation {
@@ -71,11 +75,13 @@ public final class DesignComputation {
         Job j = new Job(Messages.DesignComputation_jobName) {
             @Override
             protected IStatus run(IProgressMonitor monitor) {
-                monitor.beginTask(Messages.DesignComputation_jobName, IProgressMonitor.UNKNOWN);
+                monitor.beginTask(Messages.DesignComputation_jobName, PROGRESS_TICKS);
                 ResultState state;
                 try {
-                    DesignRun run = DesignPipeline.run(copy);
+                    DesignRun run = DesignPipeline.run(copy, DesignSettings.defaults(), progress(monitor));
                     state = new ResultState(ResultState.Status.READY, run, null, null, mine);
+                } catch (DesignCancelledException e) {
+                    return Status.CANCEL_STATUS;
                 } catch (DesignInputException e) {
                     state = new ResultState(ResultState.Status.INPUT_ERRORS, null, e.problems(), null, mine);
                 } catch (RuntimeException e) {
@@ -97,6 +103,30 @@ public final class DesignComputation {
         j.setSystem(true);
         job = j;
         j.schedule();
+    }
+
+    /** Ticks of the job's progress monitor for a whole run. */
+    static final int PROGRESS_TICKS = 1000;
+
+    /** The pipeline's progress forwarded to a job's monitor, and the monitor's cancel flag back to the pipeline. */
+    static DesignProgress progress(IProgressMonitor monitor) {
+        int[] done = { 0 };
+        return new DesignProgress() {
+            @Override
+            public void advanced(String stage, double fractionDone) {
+                int ticks = (int) Math.round(Math.max(0, Math.min(1, fractionDone)) * PROGRESS_TICKS);
+                if (ticks > done[0]) {
+                    monitor.worked(ticks - done[0]);
+                    done[0] = ticks;
+                }
+                monitor.subTask(stage);
+            }
+
+            @Override
+            public boolean cancelRequested() {
+                return monitor.isCanceled();
+            }
+        };
     }
 
     private void deliver(ResultState state) {

@@ -24,10 +24,17 @@ public final class ExportHandler {
         if (documents.active() == null) {
             return;
         }
-        ExportWizard wizard = new ExportWizard(documents.active());
-        if (new WizardDialog(shell, wizard).open() == Window.OK) {
-            MessageDialog.openInformation(shell, Messages.Export_title, Messages.bind(Messages.Export_done,
-                    wizard.written().size(), wizard.written().isEmpty() ? "" : wizard.written().get(0).getParent()));
+        ExportWizard wizard = new ExportWizard(documents.active(), documents.results(documents.active()).run());
+        if (new WizardDialog(shell, wizard).open() == Window.OK && wizard.written() != null) {
+            var files = wizard.written().files();
+            String where = files.isEmpty() ? "" : files.get(0).getParent().toString();
+            if (wizard.written().verificationPassed()) {
+                MessageDialog.openInformation(shell, Messages.Export_title, Messages.bind(Messages.Export_done, files.size(),
+                        where));
+            } else {
+                MessageDialog.openWarning(shell, Messages.Export_title, Messages.bind(Messages.Export_doneVerificationFailed,
+                        files.size(), where));
+            }
         }
     }
 }

@@ -8,17 +8,19 @@ import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.swt.widgets.Display;
 
-import eluvia.design.uncertainty.MonteCarloRunner;
+import eluvia.design.DesignSettings;
+import eluvia.design.UncertaintyAnalysis;
+import eluvia.design.UncertaintyResults;
 import eluvia.design.uncertainty.ProgressSink;
 import eluvia.design.uncertainty.SimulationSettings;
-import eluvia.design.uncertainty.UncertaintyResult;
-import eluvia.design.uncertainty.UncertaintyStudy;
+import eluvia.site.model.Project;
 import eluvia.ui.internal.Messages;
 
 /**
- * A Monte Carlo simulation (eluvia.design.uncertainty {@link MonteCarloRunner}) as a cancellable
- * Eclipse job: the engine's progress goes to the job's monitor and to a listener on the UI thread;
- * cancelling the job makes the engine stop and return its partial result, marked cancelled.
+ * The project's uncertainty analysis (eluvia.design {@link UncertaintyAnalysis}: Monte Carlo runs
+ * of the whole design pipeline) as a cancellable Eclipse job: the engine's progress goes to the
+ * job's monitor and to a listener on the UI thread; cancelling the job makes the engine stop and
+ * return its partial result, marked cancelled.
  */
 public final class UncertaintyJob extends Job {
 
@@ -28,19 +30,22 @@ public final class UncertaintyJob extends Job {
         void progress(int done, int total);
 
         /** Called on the UI thread with the result (partial and marked cancelled after a cancel), or the failure. */
-        void finished(UncertaintyResult resultOrNull, String failureOrNull);
+        void finished(UncertaintyResults resultOrNull, String failureOrNull);
     }
 
-    private final UncertaintyStudy study;
+    private final Project project;
     private final SimulationSettings settings;
     private final Display display;
     private final Listener listener;
-    private volatile UncertaintyResult result;
+    private volatile UncertaintyResults result;
 
-    public UncertaintyJob(UncertaintyStudy study, SimulationSettings settings, Display display, Listener listener) {
+    /**
+     * @param project a copy of the project to analyse (the job must not share it with the UI thread)
+     */
+    public UncertaintyJob(Project project, Display display, Listener listener) {
         super(Messages.Uncertainty_jobName);
-        this.study = study;
-        this.settings = settings;
+        this.project = project;
+        this.settings = UncertaintyAnalysis.settingsOf(project);
         this.display = display;
         this.listener = listener;
         setUser(true);
@@ -69,20 +74,25 @@ public final class UncertaintyJob extends Job {
         };
         String failure = null;
         try {
-            result = new MonteCarloRunner(settings).run(study, sink);
+            result = UncertaintyAnalysis.run(project, DesignSettings.defaults(), settings, sink);
         } catch (RuntimeException e) {
             failure = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
         } finally {
             monitor.done();
         }
-        UncertaintyResult r = result;
+        UncertaintyResults r = result;
         String f = failure;
         post(() -> listener.finished(r, f));
         return monitor.isCanceled() ? Status.CANCEL_STATUS : Status.OK_STATUS;
     }
 
+    /** The runs the job was asked for. */
+    public int requestedRuns() {
+        return settings.runCount();
+    }
+
     /** The result once the job has finished (partial after a cancel), or null. */
-    public UncertaintyResult result() {
+    public UncertaintyResults result() {
         return result;
     }
 

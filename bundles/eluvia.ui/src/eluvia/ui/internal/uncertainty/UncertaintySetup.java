@@ -1,44 +1,29 @@
 package eluvia.ui.internal.uncertainty;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
-import java.util.Objects;
 
 import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.EStructuralFeature;
-import org.eclipse.emf.ecore.util.EcoreUtil;
 
-import eluvia.design.DesignPipeline;
-import eluvia.design.FlushingDesignResult;
-import eluvia.design.uncertainty.RankCorrelationMatrix;
-import eluvia.design.uncertainty.SamplingMethod;
-import eluvia.design.uncertainty.SimulationSettings;
-import eluvia.design.uncertainty.UncertaintyInputException;
-import eluvia.design.uncertainty.UncertaintyStudy;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.DispersivityRule;
 import eluvia.site.model.FlushingDesign;
 import eluvia.site.model.InputDistributionKind;
 import eluvia.site.model.Project;
-import eluvia.site.model.RankCorrelation;
 import eluvia.site.model.SiteFactory;
 import eluvia.site.model.SitePackage;
 import eluvia.site.model.SoilLayer;
 import eluvia.site.model.UncertainInput;
-import eluvia.site.model.UncertaintySampling;
 import eluvia.site.model.UncertaintySettings;
 import eluvia.ui.internal.Messages;
 
 /**
- * Turns a project's uncertainty settings (site model: {@link UncertaintySettings} with its
- * {@link UncertainInput}s and {@link RankCorrelation}s) into a study of the uncertainty engine whose
- * model is the design pipeline: each run copies the project, sets the sampled values and runs
- * {@link DesignPipeline#flush} for every flushing design; its outputs are the pore volumes, the
- * calendar days and the water to capture of each design. The workbench only translates the
- * project's choices; every number comes from the pipeline and the engine.
+ * Helpers for the project's uncertainty settings (site model: {@link UncertaintySettings} with its
+ * {@link UncertainInput}s): names and units as shown, the engine's distribution of an input for
+ * the preview of its P10 / P50 / P90, and suggested inputs. The analysis itself is the design
+ * bundle's {@link eluvia.design.UncertaintyAnalysis}.
  *
  * <p>{@link #suggestions} offers inputs with stated starting spreads, not data: a triangular
  * &plusmn;{@value #FLUX_SPREAD_PERCENT} % on each design's Darcy flux, a lognormal of geometric
@@ -62,21 +47,6 @@ public final class UncertaintySetup {
     private static final SitePackage P = SitePackage.eINSTANCE;
 
     private UncertaintySetup() {
-    }
-
-    /** Output name of a design's pore volumes. */
-    public static String poreVolumesOutput(String design) {
-        return Messages.bind(Messages.Uncertainty_outputPoreVolumes, design);
-    }
-
-    /** Output name of a design's calendar days. */
-    public static String daysOutput(String design) {
-        return Messages.bind(Messages.Uncertainty_outputDays, design);
-    }
-
-    /** Output name of a design's water to capture. */
-    public static String waterOutput(String design) {
-        return Messages.bind(Messages.Uncertainty_outputWater, design);
     }
 
     /** The SI unit a model attribute's name states, e.g. m/d for darcyFluxMetresPerDay; "-" when it states none. */
@@ -190,75 +160,5 @@ public final class UncertaintySetup {
         case TRIANGULAR -> eluvia.design.uncertainty.UncertainInput.triangular(name, unit, i.getMinimumInFeatureUnit(),
                 i.getModeInFeatureUnit(), i.getMaximumInFeatureUnit());
         };
-    }
-
-    /** The engine's settings for the project's uncertainty settings and the machine's cores. */
-    public static SimulationSettings settings(UncertaintySettings s) {
-        SimulationSettings d = SimulationSettings.defaults();
-        return new SimulationSettings(s.getRunCount(), s.getSamplingMethod() == UncertaintySampling.PLAIN
-                ? SamplingMethod.PLAIN_MONTE_CARLO : SamplingMethod.LATIN_HYPERCUBE, s.getSeed(), d.threadCount(), 0);
-    }
-
-    /**
-     * The study for a project's uncertainty settings. The project is copied now (on the caller's
-     * thread); the model works on copies of that copy, so the user may go on editing.
-     *
-     * @throws UncertaintyInputException when the project has no uncertain inputs or one is not usable, naming it
-     */
-    public static UncertaintyStudy study(Project project) {
-        UncertaintySettings settings = project.getUncertainty();
-        if (settings == null || settings.getInputs().isEmpty()) {
-            throw new UncertaintyInputException("uncertain inputs", "(none)",
-                    "at least one; add them on the editor's Uncertainty page");
-        }
-        Project base = EcoreUtil.copy(project);
-        Map<String, String> paths = new HashMap<>();
-        Map<String, EAttribute> attributes = new HashMap<>();
-        UncertaintyStudy.Builder b = UncertaintyStudy.builder();
-        for (UncertainInput i : settings.getInputs()) {
-            String name = nameOf(i);
-            EObject target = i.getTarget();
-            EStructuralFeature f = target == null ? null : target.eClass().getEStructuralFeature(i.getFeatureName());
-            if (!(f instanceof EAttribute a) || a.getEAttributeType().getInstanceClass() != double.class
-                    || !EcoreUtil.isAncestor(project, target)) {
-                throw new UncertaintyInputException("uncertain input " + name, Objects.toString(i.getFeatureName()),
-                        "a number field of an object of this project; see the Problems view");
-            }
-            b.input(engineInputOf(i));
-            paths.put(name, EcoreUtil.getRelativeURIFragmentPath(project, target));
-            attributes.put(name, a);
-        }
-        if (!settings.getRankCorrelations().isEmpty()) {
-            RankCorrelationMatrix.Builder m = RankCorrelationMatrix.builder();
-            for (RankCorrelation r : settings.getRankCorrelations()) {
-                m.pair(nameOf(r.getFirst()), nameOf(r.getSecond()), r.getCoefficient());
-            }
-            b.rankCorrelation(m.build());
-        }
-        for (FlushingDesign d : project.getFlushingDesigns()) {
-            b.output(poreVolumesOutput(d.getName()), "PV").output(daysOutput(d.getName()), "d")
-                    .output(waterOutput(d.getName()), "m3");
-        }
-        b.model(values -> {
-            Project copy;
-            synchronized (base) {
-                copy = EcoreUtil.copy(base);
-            }
-            for (String name : values.names()) {
-                EcoreUtil.getEObject(copy, paths.get(name)).eSet(attributes.get(name), values.get(name));
-            }
-            Map<String, Double> out = new HashMap<>();
-            for (FlushingDesign d : copy.getFlushingDesigns()) {
-                FlushingDesignResult r = DesignPipeline.flush(copy, d);
-                if (!r.allReachable()) {
-                    throw new IllegalStateException(Messages.bind(Messages.Uncertainty_notReached, d.getName()));
-                }
-                out.put(poreVolumesOutput(d.getName()), r.poreVolumes());
-                out.put(daysOutput(d.getName()), r.calendarDays());
-                out.put(waterOutput(d.getName()), r.waterCapturedCubicMetres());
-            }
-            return out;
-        });
-        return b.build();
     }
 }

@@ -55,11 +55,15 @@ abstract class ChartView extends DocumentView {
         GridData nd = new GridData(SWT.FILL, SWT.TOP, true, false);
         nd.widthHint = 360;
         notes.setLayoutData(nd);
-        first.addListener(SWT.Selection, e -> {
-            fillSecond();
-            redrawChart();
-        });
-        second.addListener(SWT.Selection, e -> redrawChart());
+        if (first != null) {
+            first.addListener(SWT.Selection, e -> {
+                fillSecond();
+                redrawChart();
+            });
+        }
+        if (second != null) {
+            second.addListener(SWT.Selection, e -> redrawChart());
+        }
     }
 
     private static Combo combo(Composite bar, String label) {
@@ -169,6 +173,11 @@ abstract class ChartView extends DocumentView {
     /** The notes line's text (tests). */
     public String notesText() {
         return notes.getText();
+    }
+
+    /** The project of the active document, or null. */
+    protected eluvia.site.model.Project project() {
+        return documents.active() == null ? null : documents.active().project();
     }
 
     /** The run shown (tests). */

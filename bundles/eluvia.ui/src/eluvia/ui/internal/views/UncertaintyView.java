@@ -18,9 +18,9 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 
+import eluvia.design.UncertaintyHeadline;
+import eluvia.design.UncertaintyResults;
 import eluvia.design.uncertainty.OutputStatistics;
-import eluvia.design.uncertainty.SimulationSettings;
-import eluvia.design.uncertainty.UncertaintyResult;
 import eluvia.report.chart.Axis;
 import eluvia.report.chart.Histogram;
 import eluvia.report.chart.Marker;
@@ -63,7 +63,7 @@ public final class UncertaintyView extends DocumentView {
     /** What the view keeps per document. */
     private static final class Session {
         UncertaintyJob job;
-        UncertaintyResult result;
+        UncertaintyResults result;
         String failure;
         int done;
         int total;
@@ -254,12 +254,9 @@ public final class UncertaintyView extends DocumentView {
             return;
         }
         UncertaintyJob job;
-        SimulationSettings settings;
         try {
-            var study = UncertaintySetup.study(document.project());
-            settings = UncertaintySetup.settings(document.project().getUncertainty());
             Session mine = s;
-            job = new UncertaintyJob(study, settings, getDisplay(), new UncertaintyJob.Listener() {
+            job = new UncertaintyJob(document.snapshot(), getDisplay(), new UncertaintyJob.Listener() {
                 @Override
                 public void progress(int done, int total) {
                     mine.done = done;
@@ -270,7 +267,7 @@ public final class UncertaintyView extends DocumentView {
                 }
 
                 @Override
-                public void finished(UncertaintyResult resultOrNull, String failureOrNull) {
+                public void finished(UncertaintyResults resultOrNull, String failureOrNull) {
                     mine.result = resultOrNull;
                     mine.failure = failureOrNull;
                     if (!isDisposed() && session() == mine) {
@@ -287,7 +284,7 @@ public final class UncertaintyView extends DocumentView {
         s.result = null;
         s.failure = null;
         s.done = 0;
-        s.total = settings.runCount();
+        s.total = job.requestedRuns();
         job.schedule();
         showSession();
     }
@@ -323,12 +320,13 @@ public final class UncertaintyView extends DocumentView {
         } else if (s.result != null) {
             status.setText(s.result.cancelled()
                     ? Messages.bind(Messages.Uncertainty_cancelled, s.result.completedRunCount(), s.result.requestedRunCount())
-                    : Messages.bind(Messages.Uncertainty_done, s.result.completedRunCount(), s.result.failedRunCount()));
+                    : Messages.bind(Messages.Uncertainty_done, s.result.completedRunCount(), s.result.failedRunCount())
+                            + failures(s.result));
         } else {
             status.setText(Messages.Uncertainty_notRun);
         }
         List<String> outputs = s == null || s.result == null ? List.of()
-                : s.result.outputStatistics().stream().map(OutputStatistics::name).toList();
+                : s.result.headlines().stream().map(UncertaintyHeadline::outputName).toList();
         String keep = output.getSelectionIndex() >= 0 ? output.getItem(output.getSelectionIndex()) : null;
         output.setItems(outputs.toArray(String[]::new));
         if (!outputs.isEmpty()) {
@@ -338,9 +336,18 @@ public final class UncertaintyView extends DocumentView {
         layout(true, true);
     }
 
+    private static String failures(UncertaintyResults r) {
+        if (r.failureCounts().isEmpty()) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder();
+        r.failureCounts().forEach((reason, n) -> b.append(' ').append(Messages.bind(Messages.Uncertainty_failureCount, n, reason)));
+        return b.toString();
+    }
+
     private void showCharts() {
         Session s = session();
-        UncertaintyResult r = s == null ? null : s.result;
+        UncertaintyResults r = s == null ? null : s.result;
         String name = output.getSelectionIndex() >= 0 ? output.getItem(output.getSelectionIndex()) : null;
         if (r == null || name == null || r.completedRunCount() < 1) {
             histogram.setChart(null, Messages.Uncertainty_noResult);
@@ -348,13 +355,15 @@ public final class UncertaintyView extends DocumentView {
             statistics.setText("");
             return;
         }
-        OutputStatistics st = r.statistics(name);
-        double[] samples = r.runs().completedOutputValues(name);
-        histogram.setChart(new Histogram(Messages.bind(Messages.Uncertainty_histogramTitle, name),
-                new Axis(name, st.unit()), samples, Math.max(1, Math.min(Histogram.MAX_BINS, st.histogram().binCount())),
+        UncertaintyHeadline h = r.headline(name);
+        OutputStatistics st = h.statistics();
+        String unit = "1".equals(h.unit()) ? "PV" : h.unit();
+        double[] samples = r.simulation().runs().completedOutputValues(name);
+        histogram.setChart(samples.length == 0 ? null : new Histogram(Messages.bind(Messages.Uncertainty_histogramTitle, name),
+                new Axis(name, unit), samples, Math.max(1, Math.min(Histogram.MAX_BINS, st.histogram().binCount())),
                 List.of(new Marker(st.p10(), "P10"), new Marker(st.p50(), "P50"), new Marker(st.p90(), "P90"))),
                 Messages.Uncertainty_noResult);
-        eluvia.design.uncertainty.Tornado t = r.tornado(name);
+        eluvia.design.uncertainty.Tornado t = h.tornado();
         List<TornadoBar> bars = new ArrayList<>();
         for (eluvia.design.uncertainty.TornadoBar b : t.bars()) {
             if (Double.isFinite(b.outputAtLowInput()) && Double.isFinite(b.outputAtHighInput())) {
@@ -364,18 +373,25 @@ public final class UncertaintyView extends DocumentView {
             }
         }
         tornado.setChart(bars.isEmpty() || !Double.isFinite(t.baseOutputValue()) ? null
-                : new Tornado(Messages.bind(Messages.Uncertainty_tornadoTitle, name), new Axis(name, st.unit()),
+                : new Tornado(Messages.bind(Messages.Uncertainty_tornadoTitle, name), new Axis(name, unit),
                         t.baseOutputValue(), bars), Messages.Uncertainty_noTornado);
         statistics.setText(Messages.bind(Messages.Uncertainty_statistics,
                 new Object[] { st.sampleCount(), Numbers.format(st.mean(), 3), Numbers.format(st.standardDeviation(), 3),
-                        Numbers.format(st.p10(), 3), Numbers.format(st.p50(), 3), Numbers.format(st.p90(), 3), st.unit(),
-                        OutputStatistics.PERCENTILE_DEFINITION }));
+                        Numbers.format(st.p10(), 3), Numbers.format(st.p50(), 3), Numbers.format(st.p90(), 3), unit,
+                        OutputStatistics.PERCENTILE_DEFINITION })
+                + " " + Messages.bind(Messages.Uncertainty_base, Numbers.format(h.baseValue(), 3), unit));
     }
 
     /** The latest result for the active document, or null (tests). */
-    public UncertaintyResult result() {
+    public UncertaintyResults result() {
         Session s = session();
         return s == null ? null : s.result;
+    }
+
+    /** Why the last simulation of the active document could not run, or null (tests). */
+    public String failure() {
+        Session s = session();
+        return s == null ? null : s.failure;
     }
 
     /** The running or last job for the active document, or null (tests). */

@@ -11,31 +11,49 @@ import org.eclipse.core.runtime.OperationCanceledException;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.FrameworkUtil;
 
+import eluvia.design.DesignCancelledException;
 import eluvia.design.DesignPipeline;
+import eluvia.design.DesignProgress;
 import eluvia.design.DesignRun;
+import eluvia.design.DesignSettings;
 import eluvia.report.DesignPackage;
-import eluvia.site.model.ExcavationDesign;
-import eluvia.site.model.FlushingDesign;
+import eluvia.report.PackageOptions;
+import eluvia.report.PackageResult;
 import eluvia.site.model.Project;
 import eluvia.ui.internal.Messages;
 import eluvia.ui.internal.document.ProjectDocument;
 
 /**
  * Writes the design package of a saved project through the report bundle: the design pipeline
- * runs on a copy of the project that keeps only the chosen alternatives, and
- * {@link DesignPackage#write} writes its files (with the cautions the run carries).
+ * runs on a copy of the project (progress to the monitor, cancellable), and
+ * {@link DesignPackage#write} writes the HTML, the PDF when asked, results.json and a CSV per
+ * chart, reporting only the chosen alternatives; every package carries the cautions.
  */
 public final class DesignExport {
 
     private DesignExport() {
     }
 
-    /** The alternatives a project offers for export: its flushing and excavation designs, by name. */
-    public static List<String> alternatives(Project project) {
+    /**
+     * The alternatives a package can report: the flushing designs and the priced alternatives of a
+     * run, by name; without a run, the project's flushing and excavation designs.
+     */
+    public static List<String> alternatives(Project project, DesignRun runOrNull) {
         List<String> names = new ArrayList<>();
-        project.getFlushingDesigns().forEach(d -> names.add(d.getName()));
-        project.getExcavationDesigns().forEach(d -> names.add(d.getName()));
+        if (runOrNull != null) {
+            runOrNull.flushing().forEach(r -> add(names, r.designName()));
+            runOrNull.alternatives().forEach(a -> add(names, a.name()));
+        } else {
+            project.getFlushingDesigns().forEach(d -> add(names, d.getName()));
+            project.getExcavationDesigns().forEach(d -> add(names, d.getName()));
+        }
         return names;
+    }
+
+    private static void add(List<String> names, String name) {
+        if (name != null && !names.contains(name)) {
+            names.add(name);
+        }
     }
 
     /**
@@ -48,30 +66,53 @@ public final class DesignExport {
      * @throws IllegalStateException when the document has unsaved changes
      * @throws OperationCanceledException when the monitor was cancelled
      */
-    public static List<Path> export(ProjectDocument document, Path folder, Set<String> chosen, boolean pdf,
+    public static PackageResult export(ProjectDocument document, Path folder, Set<String> chosen, boolean pdf,
             IProgressMonitor monitor) throws IOException {
         if (document.isDirty()) {
             throw new IllegalStateException(Messages.Export_unsaved);
         }
-        monitor.beginTask(Messages.Export_task, 3);
+        monitor.beginTask(Messages.Export_task, 2 * WORK);
         Project copy = document.snapshot();
-        List<FlushingDesign> dropF = copy.getFlushingDesigns().stream().filter(d -> !chosen.contains(d.getName())).toList();
-        List<ExcavationDesign> dropE = copy.getExcavationDesigns().stream().filter(d -> !chosen.contains(d.getName()))
-                .toList();
-        copy.getFlushingDesigns().removeAll(dropF);
-        copy.getExcavationDesigns().removeAll(dropE);
         monitor.subTask(Messages.Export_running);
-        DesignRun run = DesignPipeline.run(copy);
-        monitor.worked(1);
+        DesignRun run;
+        try {
+            run = DesignPipeline.run(copy, DesignSettings.defaults(), new DesignProgress() {
+                int done;
+
+                @Override
+                public void advanced(String stage, double fractionDone) {
+                    int ticks = (int) Math.round(Math.max(0, Math.min(1, fractionDone)) * WORK);
+                    if (ticks > done) {
+                        monitor.worked(ticks - done);
+                        done = ticks;
+                    }
+                    monitor.subTask(stage);
+                }
+
+                @Override
+                public boolean cancelRequested() {
+                    return monitor.isCanceled();
+                }
+            });
+        } catch (DesignCancelledException e) {
+            throw new OperationCanceledException();
+        }
         if (monitor.isCanceled()) {
             throw new OperationCanceledException();
         }
         monitor.subTask(Messages.Export_writing);
-        List<Path> written = DesignPackage.write(copy, run, document.fileBytes(), productVersion(), folder);
-        monitor.worked(2);
+        PackageOptions options = PackageOptions.defaults().withPdf(pdf);
+        if (chosen != null && !chosen.isEmpty()) {
+            options = options.withAlternatives(chosen);
+        }
+        PackageResult written = DesignPackage.write(copy, run, document.fileBytes(), productVersion(), folder, options);
+        monitor.worked(WORK);
         monitor.done();
         return written;
     }
+
+    /** Ticks of each of the export's two steps. */
+    static final int WORK = 1000;
 
     /** The version of this bundle, or "development build" outside OSGi. */
     static String productVersion() {

@@ -3,7 +3,6 @@ package eluvia.ui.internal.wizards;
 import java.lang.reflect.InvocationTargetException;
 import java.nio.file.Path;
 import java.util.LinkedHashSet;
-import java.util.List;
 import java.util.Set;
 
 import org.eclipse.core.runtime.OperationCanceledException;
@@ -22,6 +21,8 @@ import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 
 import eluvia.design.Cautions;
+import eluvia.design.DesignRun;
+import eluvia.report.PackageResult;
 import eluvia.ui.internal.Messages;
 import eluvia.ui.internal.document.ProjectDocument;
 
@@ -32,15 +33,17 @@ import eluvia.ui.internal.document.ProjectDocument;
  */
 public final class ExportWizard extends Wizard {
 
-    /** Whether the report bundle can write a PDF yet. */
-    static final boolean PDF_AVAILABLE = false;
-
     private final ProjectDocument document;
+    private final DesignRun latestRun;
     private ExportPage page;
-    private List<Path> written = List.of();
+    private PackageResult written;
 
-    public ExportWizard(ProjectDocument document) {
+    /**
+     * @param latestRun the latest results shown for the document, for the names of its alternatives (may be null)
+     */
+    public ExportWizard(ProjectDocument document, DesignRun latestRun) {
         this.document = document;
+        this.latestRun = latestRun;
         setWindowTitle(Messages.Export_title);
         setNeedsProgressMonitor(true);
     }
@@ -51,8 +54,8 @@ public final class ExportWizard extends Wizard {
         addPage(page);
     }
 
-    /** The files written by Finish. */
-    public List<Path> written() {
+    /** What Finish wrote, or null. */
+    public PackageResult written() {
         return written;
     }
 
@@ -65,8 +68,7 @@ public final class ExportWizard extends Wizard {
             if (document.isDirty()) {
                 document.save();
             }
-            @SuppressWarnings("unchecked")
-            List<Path>[] out = new List[1];
+            PackageResult[] out = new PackageResult[1];
             getContainer().run(true, true, monitor -> {
                 try {
                     out[0] = DesignExport.export(document, folder, chosen, pdf, monitor);
@@ -130,7 +132,7 @@ public final class ExportWizard extends Wizard {
             GridData ad = new GridData(SWT.FILL, SWT.FILL, true, false, 2, 1);
             ad.heightHint = alternatives.getItemHeight() * 5;
             alternatives.setLayoutData(ad);
-            for (String name : DesignExport.alternatives(document.project())) {
+            for (String name : DesignExport.alternatives(document.project(), latestRun)) {
                 TableItem item = new TableItem(alternatives, SWT.NONE);
                 item.setText(name);
                 item.setChecked(true);
@@ -138,8 +140,8 @@ public final class ExportWizard extends Wizard {
             alternatives.addListener(SWT.Selection, e -> check());
             new Label(c, SWT.NONE);
             pdfBox = new Button(c, SWT.CHECK);
-            pdfBox.setText(PDF_AVAILABLE ? Messages.Export_pdf : Messages.Export_pdfUnavailable);
-            pdfBox.setEnabled(PDF_AVAILABLE);
+            pdfBox.setText(Messages.Export_pdf);
+            pdfBox.setSelection(true);
             pdfBox.setLayoutData(new GridData(SWT.BEGINNING, SWT.CENTER, false, false, 2, 1));
             if (document.isDirty()) {
                 new Label(c, SWT.NONE);
