@@ -1479,13 +1479,103 @@ public interface SitePackage extends EPackage {
 	int PRICE_BOOK__ITEMS = 3;
 
 	/**
+	 * The feature id for the '<em><b>Scope Contingency Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__SCOPE_CONTINGENCY_PERCENT = 4;
+
+	/**
+	 * The feature id for the '<em><b>Bid Contingency Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__BID_CONTINGENCY_PERCENT = 5;
+
+	/**
+	 * The feature id for the '<em><b>Project Management Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__PROJECT_MANAGEMENT_PERCENT = 6;
+
+	/**
+	 * The feature id for the '<em><b>Remedial Design Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__REMEDIAL_DESIGN_PERCENT = 7;
+
+	/**
+	 * The feature id for the '<em><b>Construction Management Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__CONSTRUCTION_MANAGEMENT_PERCENT = 8;
+
+	/**
+	 * The feature id for the '<em><b>Operating Contingency Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__OPERATING_CONTINGENCY_PERCENT = 9;
+
+	/**
+	 * The feature id for the '<em><b>Operating Project Management Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__OPERATING_PROJECT_MANAGEMENT_PERCENT = 10;
+
+	/**
+	 * The feature id for the '<em><b>Technical Support Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__TECHNICAL_SUPPORT_PERCENT = 11;
+
+	/**
+	 * The feature id for the '<em><b>Discount Rate Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__DISCOUNT_RATE_PERCENT = 12;
+
+	/**
+	 * The feature id for the '<em><b>Discount Rate Basis</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PRICE_BOOK__DISCOUNT_RATE_BASIS = 13;
+
+	/**
 	 * The number of structural features of the '<em>Price Book</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PRICE_BOOK_FEATURE_COUNT = 4;
+	int PRICE_BOOK_FEATURE_COUNT = 14;
 
 	/**
 	 * The number of operations of the '<em>Price Book</em>' class.
@@ -3536,6 +3626,116 @@ public interface SitePackage extends EPackage {
 	EReference getPriceBook_Items();
 
 	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getScopeContingencyPercent <em>Scope Contingency Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Scope Contingency Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getScopeContingencyPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_ScopeContingencyPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getBidContingencyPercent <em>Bid Contingency Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Bid Contingency Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getBidContingencyPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_BidContingencyPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getProjectManagementPercent <em>Project Management Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Project Management Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getProjectManagementPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_ProjectManagementPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getRemedialDesignPercent <em>Remedial Design Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Remedial Design Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getRemedialDesignPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_RemedialDesignPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getConstructionManagementPercent <em>Construction Management Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Construction Management Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getConstructionManagementPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_ConstructionManagementPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getOperatingContingencyPercent <em>Operating Contingency Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Operating Contingency Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getOperatingContingencyPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_OperatingContingencyPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getOperatingProjectManagementPercent <em>Operating Project Management Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Operating Project Management Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getOperatingProjectManagementPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_OperatingProjectManagementPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getTechnicalSupportPercent <em>Technical Support Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Technical Support Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getTechnicalSupportPercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_TechnicalSupportPercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getDiscountRatePercent <em>Discount Rate Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Discount Rate Percent</em>'.
+	 * @see eluvia.site.model.PriceBook#getDiscountRatePercent()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_DiscountRatePercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.PriceBook#getDiscountRateBasis <em>Discount Rate Basis</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Discount Rate Basis</em>'.
+	 * @see eluvia.site.model.PriceBook#getDiscountRateBasis()
+	 * @see #getPriceBook()
+	 * @generated
+	 */
+	EAttribute getPriceBook_DiscountRateBasis();
+
+	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.PriceItem <em>Price Item</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -5213,6 +5413,86 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EReference PRICE_BOOK__ITEMS = eINSTANCE.getPriceBook_Items();
+
+		/**
+		 * The meta object literal for the '<em><b>Scope Contingency Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__SCOPE_CONTINGENCY_PERCENT = eINSTANCE.getPriceBook_ScopeContingencyPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Bid Contingency Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__BID_CONTINGENCY_PERCENT = eINSTANCE.getPriceBook_BidContingencyPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Project Management Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__PROJECT_MANAGEMENT_PERCENT = eINSTANCE.getPriceBook_ProjectManagementPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Remedial Design Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__REMEDIAL_DESIGN_PERCENT = eINSTANCE.getPriceBook_RemedialDesignPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Construction Management Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__CONSTRUCTION_MANAGEMENT_PERCENT = eINSTANCE.getPriceBook_ConstructionManagementPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Operating Contingency Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__OPERATING_CONTINGENCY_PERCENT = eINSTANCE.getPriceBook_OperatingContingencyPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Operating Project Management Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__OPERATING_PROJECT_MANAGEMENT_PERCENT = eINSTANCE.getPriceBook_OperatingProjectManagementPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Technical Support Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__TECHNICAL_SUPPORT_PERCENT = eINSTANCE.getPriceBook_TechnicalSupportPercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Discount Rate Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__DISCOUNT_RATE_PERCENT = eINSTANCE.getPriceBook_DiscountRatePercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Discount Rate Basis</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PRICE_BOOK__DISCOUNT_RATE_BASIS = eINSTANCE.getPriceBook_DiscountRateBasis();
 
 		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.PriceItemImpl <em>Price Item</em>}' class.

@@ -61,6 +61,13 @@ public final class SiteValidator {
     /** Depths closer than this (m) are taken as equal when checking that layers are contiguous. */
     static final double DEPTH_TOLERANCE_METRES = 1e-6;
 
+    /** Lowest real discount rate a price book may carry, % per year. */
+    private static final double MIN_DISCOUNT_RATE_PERCENT = -5;
+    /** Highest real discount rate a price book may carry, % per year. */
+    private static final double MAX_DISCOUNT_RATE_PERCENT = 30;
+    /** The model's default real discount rate, % per year (OMB Circular A-94 (1992)). */
+    private static final double DEFAULT_DISCOUNT_RATE_PERCENT = 7.0;
+
     private final List<Problem> problems = new ArrayList<>();
 
     private SiteValidator() {
@@ -744,6 +751,26 @@ public final class SiteValidator {
         if (book.getReference() == null || book.getReference().isBlank()) {
             warning(book, label, "reference", "(empty)", "not empty", "state where the rates come from and their price date");
         }
+        // Markups: per cent of a subtotal (EPA 540-R-00-002 layout); the guide's usual ranges depend
+        // on the project and are not checked here, only that a percentage is a percentage.
+        percent(book, label, "scopeContingencyPercent", book.getScopeContingencyPercent());
+        percent(book, label, "bidContingencyPercent", book.getBidContingencyPercent());
+        percent(book, label, "projectManagementPercent", book.getProjectManagementPercent());
+        percent(book, label, "remedialDesignPercent", book.getRemedialDesignPercent());
+        percent(book, label, "constructionManagementPercent", book.getConstructionManagementPercent());
+        percent(book, label, "operatingContingencyPercent", book.getOperatingContingencyPercent());
+        percent(book, label, "operatingProjectManagementPercent", book.getOperatingProjectManagementPercent());
+        percent(book, label, "technicalSupportPercent", book.getTechnicalSupportPercent());
+        double discountRatePercent = book.getDiscountRatePercent();
+        if (!(finite(discountRatePercent) && discountRatePercent >= MIN_DISCOUNT_RATE_PERCENT
+                && discountRatePercent <= MAX_DISCOUNT_RATE_PERCENT)) {
+            error(book, label, "discountRatePercent", num(discountRatePercent), "-5 to 30 % per year",
+                    "enter the real discount rate in % per year (7 for 7 %)");
+        } else if (discountRatePercent != DEFAULT_DISCOUNT_RATE_PERCENT
+                && (book.getDiscountRateBasis() == null || book.getDiscountRateBasis().isBlank())) {
+            warning(book, label, "discountRateBasis", "(empty)", "not empty when the discount rate is not the default 7 %",
+                    "state which rule or guidance the " + num(discountRatePercent) + " % rate follows");
+        }
         Set<String> codes = new HashSet<>();
         for (int i = 0; i < book.getItems().size(); i++) {
             PriceItem item = book.getItems().get(i);
@@ -1031,6 +1058,12 @@ public final class SiteValidator {
     /** True when the text is a CAS registry number with a correct check digit (see {@link CasNumbers}). */
     static boolean isValidCasNumber(String cas) {
         return CasNumbers.isValid(cas);
+    }
+
+    private void percent(EObject object, String label, String field, double valuePercent) {
+        if (!(finite(valuePercent) && valuePercent >= 0 && valuePercent <= 100)) {
+            error(object, label, field, num(valuePercent), "0 to 100 %", "enter per cent (15 for 15 %), 0 for none");
+        }
     }
 
     private boolean atLeast(EObject object, String label, String field, double value, double minimum,

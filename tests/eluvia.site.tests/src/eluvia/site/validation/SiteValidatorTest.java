@@ -345,6 +345,25 @@ final class SiteValidatorTest {
                 error("item rate negative", p -> item(p, 0).setRatePerUnit(-18), p -> item(p, 0), "ratePerUnit", "-18", "0 or more"),
                 error("no currency anywhere", p -> book(p).setCurrency(""), p -> item(p, 0), "currency", "(empty)", "a currency here or on the price book"),
                 warning("item source note empty", p -> item(p, 2).setSourceNote(""), p -> item(p, 2), "sourceNote", "(empty)", "not empty"),
+                // Price book markups: a percentage lies in [0, 100] (per cent of a subtotal, EPA 540-R-00-002 layout; fact of arithmetic)
+                error("scope contingency negative", p -> book(p).setScopeContingencyPercent(-1), p -> book(p), "scopeContingencyPercent", "-1", "0 to 100 %"),
+                error("bid contingency above 100", p -> book(p).setBidContingencyPercent(100.5), p -> book(p), "bidContingencyPercent", "100.5", "0 to 100 %"),
+                error("project management not a number", p -> book(p).setProjectManagementPercent(Double.NaN), p -> book(p), "projectManagementPercent",
+                        "NaN", "0 to 100 %"),
+                error("remedial design negative", p -> book(p).setRemedialDesignPercent(-0.5), p -> book(p), "remedialDesignPercent", "-0.5", "0 to 100 %"),
+                error("construction management above 100", p -> book(p).setConstructionManagementPercent(150), p -> book(p),
+                        "constructionManagementPercent", "150", "0 to 100 %"),
+                error("O&M contingency negative", p -> book(p).setOperatingContingencyPercent(-10), p -> book(p), "operatingContingencyPercent", "-10",
+                        "0 to 100 %"),
+                error("O&M project management infinite", p -> book(p).setOperatingProjectManagementPercent(Double.POSITIVE_INFINITY), p -> book(p),
+                        "operatingProjectManagementPercent", "Infinity", "0 to 100 %"),
+                error("technical support above 100", p -> book(p).setTechnicalSupportPercent(101), p -> book(p), "technicalSupportPercent", "101",
+                        "0 to 100 %"),
+                // Discount rate: the range this project allows for a real rate (-5 to 30 % per year, the task's bounds), both ends
+                error("discount rate above 30", p -> book(p).setDiscountRatePercent(30.5), p -> book(p), "discountRatePercent", "30.5", "-5 to 30 % per year"),
+                error("discount rate below -5", p -> book(p).setDiscountRatePercent(-6), p -> book(p), "discountRatePercent", "-6", "-5 to 30 % per year"),
+                warning("discount rate not the default without basis", p -> { book(p).setDiscountRatePercent(3); book(p).setDiscountRateBasis(" "); },
+                        p -> book(p), "discountRateBasis", "(empty)", "not empty when the discount rate is not the default 7 %"),
                 // Schema 2: column tests
                 error("column test without contaminant", p -> column(p).setContaminant(null), p -> column(p), "contaminant", "(none)",
                         "a contaminant of this project"),
@@ -477,6 +496,26 @@ final class SiteValidatorTest {
             }
         }
         assertEquals(List.of(), missing, "fields without a tested rule");
+    }
+
+    @Test
+    void priceBookMarkupsAndRateAcceptTheEndsOfTheirRanges() {
+        Project project = TestProjects.example();
+        PriceBook b = book(project);
+        b.setScopeContingencyPercent(0); // the ends of [0, 100] % (fact of arithmetic)
+        b.setBidContingencyPercent(100);
+        b.setTechnicalSupportPercent(100);
+        b.setDiscountRatePercent(-5); // the ends of -5 to 30 % per year (the task's bounds)
+        b.setDiscountRateBasis("negative real rate for the test");
+        List<Problem> atLow = SiteValidator.validate(project).stream().filter(p -> p.object() == b).collect(Collectors.toList());
+        assertEquals(List.of(), atLow);
+        b.setDiscountRatePercent(30);
+        List<Problem> atHigh = SiteValidator.validate(project).stream().filter(p -> p.object() == b).collect(Collectors.toList());
+        assertEquals(List.of(), atHigh);
+        b.setDiscountRatePercent(7.0); // the model's default rate needs no stated basis
+        b.setDiscountRateBasis(null);
+        List<Problem> atDefault = SiteValidator.validate(project).stream().filter(p -> p.object() == b).collect(Collectors.toList());
+        assertEquals(List.of(), atDefault);
     }
 
     @Test

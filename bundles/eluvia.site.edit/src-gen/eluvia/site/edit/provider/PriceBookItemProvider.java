@@ -66,6 +66,16 @@ public class PriceBookItemProvider
 			addNamePropertyDescriptor(object);
 			addCurrencyPropertyDescriptor(object);
 			addReferencePropertyDescriptor(object);
+			addScopeContingencyPercentPropertyDescriptor(object);
+			addBidContingencyPercentPropertyDescriptor(object);
+			addProjectManagementPercentPropertyDescriptor(object);
+			addRemedialDesignPercentPropertyDescriptor(object);
+			addConstructionManagementPercentPropertyDescriptor(object);
+			addOperatingContingencyPercentPropertyDescriptor(object);
+			addOperatingProjectManagementPercentPropertyDescriptor(object);
+			addTechnicalSupportPercentPropertyDescriptor(object);
+			addDiscountRatePercentPropertyDescriptor(object);
+			addDiscountRateBasisPropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
 	}
@@ -128,6 +138,226 @@ public class PriceBookItemProvider
 				 getString("_UI_PriceBook_reference_feature"),
 				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_reference_feature", "_UI_PriceBook_type"),
 				 SitePackage.Literals.PRICE_BOOK__REFERENCE,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Scope Contingency Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addScopeContingencyPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_scopeContingencyPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_scopeContingencyPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__SCOPE_CONTINGENCY_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Bid Contingency Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addBidContingencyPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_bidContingencyPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_bidContingencyPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__BID_CONTINGENCY_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Project Management Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addProjectManagementPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_projectManagementPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_projectManagementPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__PROJECT_MANAGEMENT_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Remedial Design Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addRemedialDesignPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_remedialDesignPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_remedialDesignPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__REMEDIAL_DESIGN_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Construction Management Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addConstructionManagementPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_constructionManagementPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_constructionManagementPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__CONSTRUCTION_MANAGEMENT_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Operating Contingency Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addOperatingContingencyPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_operatingContingencyPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_operatingContingencyPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__OPERATING_CONTINGENCY_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Operating Project Management Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addOperatingProjectManagementPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_operatingProjectManagementPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_operatingProjectManagementPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__OPERATING_PROJECT_MANAGEMENT_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Technical Support Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addTechnicalSupportPercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_technicalSupportPercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_technicalSupportPercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__TECHNICAL_SUPPORT_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Discount Rate Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addDiscountRatePercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_discountRatePercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_discountRatePercent_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__DISCOUNT_RATE_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Discount Rate Basis feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addDiscountRateBasisPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_PriceBook_discountRateBasis_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_PriceBook_discountRateBasis_feature", "_UI_PriceBook_type"),
+				 SitePackage.Literals.PRICE_BOOK__DISCOUNT_RATE_BASIS,
 				 true,
 				 false,
 				 false,
@@ -207,6 +437,16 @@ public class PriceBookItemProvider
 			case SitePackage.PRICE_BOOK__NAME:
 			case SitePackage.PRICE_BOOK__CURRENCY:
 			case SitePackage.PRICE_BOOK__REFERENCE:
+			case SitePackage.PRICE_BOOK__SCOPE_CONTINGENCY_PERCENT:
+			case SitePackage.PRICE_BOOK__BID_CONTINGENCY_PERCENT:
+			case SitePackage.PRICE_BOOK__PROJECT_MANAGEMENT_PERCENT:
+			case SitePackage.PRICE_BOOK__REMEDIAL_DESIGN_PERCENT:
+			case SitePackage.PRICE_BOOK__CONSTRUCTION_MANAGEMENT_PERCENT:
+			case SitePackage.PRICE_BOOK__OPERATING_CONTINGENCY_PERCENT:
+			case SitePackage.PRICE_BOOK__OPERATING_PROJECT_MANAGEMENT_PERCENT:
+			case SitePackage.PRICE_BOOK__TECHNICAL_SUPPORT_PERCENT:
+			case SitePackage.PRICE_BOOK__DISCOUNT_RATE_PERCENT:
+			case SitePackage.PRICE_BOOK__DISCOUNT_RATE_BASIS:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 			case SitePackage.PRICE_BOOK__ITEMS:

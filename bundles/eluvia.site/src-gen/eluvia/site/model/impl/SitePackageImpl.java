@@ -1634,6 +1634,106 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	@Override
+	public EAttribute getPriceBook_ScopeContingencyPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_BidContingencyPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_ProjectManagementPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_RemedialDesignPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_ConstructionManagementPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_OperatingContingencyPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_OperatingProjectManagementPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_TechnicalSupportPercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_DiscountRatePercent() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(12);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getPriceBook_DiscountRateBasis() {
+		return (EAttribute)priceBookEClass.getEStructuralFeatures().get(13);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getPriceItem() {
 		return priceItemEClass;
 	}
@@ -2350,6 +2450,16 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		createEAttribute(priceBookEClass, PRICE_BOOK__CURRENCY);
 		createEAttribute(priceBookEClass, PRICE_BOOK__REFERENCE);
 		createEReference(priceBookEClass, PRICE_BOOK__ITEMS);
+		createEAttribute(priceBookEClass, PRICE_BOOK__SCOPE_CONTINGENCY_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__BID_CONTINGENCY_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__PROJECT_MANAGEMENT_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__REMEDIAL_DESIGN_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__CONSTRUCTION_MANAGEMENT_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__OPERATING_CONTINGENCY_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__OPERATING_PROJECT_MANAGEMENT_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__TECHNICAL_SUPPORT_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__DISCOUNT_RATE_PERCENT);
+		createEAttribute(priceBookEClass, PRICE_BOOK__DISCOUNT_RATE_BASIS);
 
 		priceItemEClass = createEClass(PRICE_ITEM);
 		createEAttribute(priceItemEClass, PRICE_ITEM__CODE);
@@ -2588,6 +2698,16 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		initEAttribute(getPriceBook_Currency(), ecorePackage.getEString(), "currency", null, 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getPriceBook_Reference(), ecorePackage.getEString(), "reference", null, 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getPriceBook_Items(), this.getPriceItem(), null, "items", null, 0, -1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_ScopeContingencyPercent(), ecorePackage.getEDouble(), "scopeContingencyPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_BidContingencyPercent(), ecorePackage.getEDouble(), "bidContingencyPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_ProjectManagementPercent(), ecorePackage.getEDouble(), "projectManagementPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_RemedialDesignPercent(), ecorePackage.getEDouble(), "remedialDesignPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_ConstructionManagementPercent(), ecorePackage.getEDouble(), "constructionManagementPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_OperatingContingencyPercent(), ecorePackage.getEDouble(), "operatingContingencyPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_OperatingProjectManagementPercent(), ecorePackage.getEDouble(), "operatingProjectManagementPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_TechnicalSupportPercent(), ecorePackage.getEDouble(), "technicalSupportPercent", "0.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_DiscountRatePercent(), ecorePackage.getEDouble(), "discountRatePercent", "7.0", 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getPriceBook_DiscountRateBasis(), ecorePackage.getEString(), "discountRateBasis", null, 0, 1, PriceBook.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(priceItemEClass, PriceItem.class, "PriceItem", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getPriceItem_Code(), ecorePackage.getEString(), "code", null, 0, 1, PriceItem.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
