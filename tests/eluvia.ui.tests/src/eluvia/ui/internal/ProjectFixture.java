@@ -33,8 +33,13 @@ public final class ProjectFixture implements AutoCloseable {
     public final FlushingResultsView results;
     public final ProblemsView problems;
     private long published;
+    private final String home;
 
     private ProjectFixture(Path file, UnitSystem units) throws Exception {
+        // the views read the user's preferences: give the test a home of its own (SI, no recent files)
+        home = System.getProperty("user.home");
+        System.setProperty("user.home", file.resolveSibling("home").toString());
+        eluvia.ui.internal.preferences.UiPreferences.reset();
         gui = Gui.open(1280, 860);
         document = ProjectDocument.open(file);
         SashForm sash = new SashForm(gui.shell, SWT.HORIZONTAL);
@@ -82,5 +87,7 @@ public final class ProjectFixture implements AutoCloseable {
         documents.unregister(document);
         gui.close();
         document.dispose();
+        System.setProperty("user.home", home);
+        eluvia.ui.internal.preferences.UiPreferences.reset();
     }
 }

@@ -164,6 +164,31 @@ final class EditorWorkflowTest {
     }
 
     @Test
+    void theExcavationCautionShowsWhileThePitIsDeeperThanFiveFeet() throws Exception {
+        try (ProjectFixture f = ProjectFixture.example(dir, UnitSystem.SI)) {
+            f.awaitResults();
+            f.editor.showPage(f.editor.pageIndex("Excavation"));
+            f.gui.flush();
+            eluvia.site.model.ExcavationDesign design = f.document.project().getExcavationDesigns().get(0);
+            // 5 ft = 1.524 m (1 ft = 0.3048 m exactly, REFERENCES.md; US OSHA 29 CFR 1926 Subpart P threshold)
+            assertEquals(1.524, ExcavationPage.PROTECTIVE_SYSTEM_DEPTH_METRES, 1e-12);
+            assertTrue(ExcavationPage.pitDepthMetres(design) > 1.524, "the example's pit is deeper than 5 ft");
+            org.eclipse.swt.widgets.Composite caution = Gui.find(f.editor, org.eclipse.swt.widgets.Composite.class,
+                    c -> "caution".equals(c.getData("eluvia.role")) && c.getChildren().length > 0
+                            && ((org.eclipse.swt.widgets.Label) c.getChildren()[0]).getText().contains("1.5 m"));
+            assertTrue(caution.isVisible());
+            f.gui.screenshot("editor-excavation-page");
+            f.document.execute(org.eclipse.emf.edit.command.SetCommand.create(f.document.domain(), design,
+                    SitePackage.eINSTANCE.getExcavationDesign_Zone(), null));
+            f.gui.flush();
+            assertFalse(caution.isVisible(), "no pit, no caution");
+            f.document.undo();
+            f.gui.flush();
+            assertTrue(caution.isVisible());
+        }
+    }
+
+    @Test
     void usCustomaryUnitsAreShownAndTypedButSiIsStored() throws Exception {
         try (ProjectFixture f = ProjectFixture.example(dir, UnitSystem.US_CUSTOMARY)) {
             f.awaitResults();
