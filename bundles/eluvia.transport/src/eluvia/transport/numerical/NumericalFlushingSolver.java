@@ -21,19 +21,19 @@ import eluvia.transport.TransportInputException;
  * gradient), which is also the flux-averaged effluent concentration. Time stepping is implicit,
  * with the variable-step second-order backward differentiation formula (BDF2, expected global
  * order 2 in time; the first step, and any step more than twice the one before, is backward
- * Euler) applied to the conserved quantity, the
- * solute per bulk volume; with the central scheme the expected order in space is 2 too, with
- * upwind 1. Each step solves one tridiagonal system by the Thomas algorithm; the immobile region
- * of a two-region layer is eliminated cell by cell before the solve (static condensation), so it
- * costs no extra system. With linear sorption a step is a single solve, and the factorisation is
- * reused while the step length does not change. With nonlinear sorption each step iterates
- * Newton's method with the exact Jacobian, from the linear extrapolation of the last two states,
- * until the error left (the update itself, or the update times theta / (1 - theta) with theta the
+ * Euler) applied to the conserved quantity, the solute per bulk volume; with the central scheme
+ * the expected order in space is 2 too, with upwind 1. Each step solves one tridiagonal system by
+ * the Thomas algorithm; the immobile region of a two-region layer is eliminated cell by cell
+ * before the solve (static condensation), so it costs no extra system. With linear sorption a
+ * step is a single solve, and the factorisation is reused while the step length does not change.
+ * With nonlinear sorption each step iterates Newton's method with the exact Jacobian, from the
+ * linear extrapolation of the last two states, until the stored mass that the remaining error
+ * stands for (dM/dC times the update, or times the update times theta / (1 - theta), theta the
  * observed contraction rate) is below the relative tolerance of the settings (default 1e-9) times
- * |C| (the larger of the value at the start of the step and the first guess) plus 1e-12 times the
- * reference concentration, in every cell; the slope of a Freundlich
- * isotherm is taken at that absolute floor where C is smaller, which keeps the Jacobian finite at
- * C = 0. Typically two iterations a step.
+ * the cell's stored mass plus 1e-12 times the mass stored at the reference concentration, in every
+ * cell. Freundlich slopes are taken no lower than the concentration C_ref 1e-12^(1/n), where the
+ * sorbed amount is below that absolute tolerance; this keeps the Jacobian finite at C = 0.
+ * Typically two iterations a step.
  *
  * <p><b>Units.</b> Concentrations in mg/L (water) and mg/kg (soil), depths in m, times in days,
  * masses in mg per m<sup>2</sup> of plan area.
@@ -53,7 +53,7 @@ public final class NumericalFlushingSolver {
     private static final int LANGMUIR = 2;
     /** Litres per cubic metre: converts (mg/L) times m to mg/m2. */
     private static final double LITRES_PER_CUBIC_METRE = 1000.0;
-    /** Absolute Newton floor, as a fraction of the reference concentration. */
+    /** Absolute Newton floors, as fractions of the reference concentration and of the mass stored at it. */
     private static final double NEWTON_ABSOLUTE_FLOOR = 1e-12;
     /** Local error of BDF2 over the difference to the quadratic predictor (constant steps). */
     private static final double BDF2_ERROR_CONSTANT = 2.0 / 11.0;

@@ -177,7 +177,10 @@ public final class SolverSettings {
         return concentrationFloorFraction;
     }
 
-    /** Newton stops when every update is below this times |C| (plus a tiny absolute floor). */
+    /**
+     * Newton stops when, in every cell, the stored mass its remaining error stands for is below
+     * this times the cell's stored mass (plus 1e-12 of the mass at the reference concentration).
+     */
     public double newtonRelativeTolerance() {
         return newtonRelativeTolerance;
     }
