@@ -74,6 +74,7 @@ public final class DesignSettings {
     private final int enlargementCellsPerAxis;
     private final double hotSpotMultiple;
     private final double discountRatePercent;
+    private final boolean discountRateEntered;
     private final AccuracyRange accuracy;
     private final CapitalMarkups capitalMarkups;
     private final OperatingMarkups operatingMarkups;
@@ -150,6 +151,7 @@ public final class DesignSettings {
                     "the hot spot is the soil above this multiple of the cleanup level"));
         }
         discountRatePercent = b.discountRatePercent;
+        discountRateEntered = b.discountRateEntered;
         if (!(discountRatePercent > -100 && discountRatePercent <= 100)) {
             problems.add(problem("discountRatePercent", num(discountRatePercent), "(-100, 100] % per year",
                     "enter per cent per year (7 for 7 %)"));
@@ -288,9 +290,21 @@ public final class DesignSettings {
         return hotSpotMultiple;
     }
 
-    /** Real discount rate, % per year (default {@link PresentValue#DEFAULT_RATE_RULE}). */
+    /**
+     * Real discount rate, % per year (default {@link PresentValue#DEFAULT_RATE_RULE}). It prices
+     * an alternative only when {@link #discountRateEntered()} or when the invented example book
+     * prices it; otherwise the rate of the project's price book applies.
+     */
     public double discountRatePercent() {
         return discountRatePercent;
+    }
+
+    /**
+     * Whether the discount rate was set for this run ({@link Builder#discountRatePercent(double)}):
+     * then it wins over the rate of a project's price book.
+     */
+    public boolean discountRateEntered() {
+        return discountRateEntered;
     }
 
     /** Whether the discount rate is the default. */
@@ -304,10 +318,10 @@ public final class DesignSettings {
     }
 
     /**
-     * Capital markups (contingency, professional and technical services); null (default): the
-     * example price book's invented markups when the invented example book prices the
-     * alternative, none otherwise (the project file has no field for markups; every estimate then
-     * says so).
+     * Capital markups (contingency, professional and technical services); when set they win over
+     * the price book's. Null (default): the markups of the project's price book that prices the
+     * alternative (its percentage fields), or the invented markups of the example book when the
+     * invented example book prices it; every estimate states which.
      */
     public CapitalMarkups capitalMarkups() {
         return capitalMarkups;
@@ -370,13 +384,14 @@ public final class DesignSettings {
                 enlargementCellsPerAxis == d.enlargementCellsPerAxis));
         s.add(line("hot-spot multiple of the cleanup level (dimensionless)", fmt(hotSpotMultiple),
                 hotSpotMultiple == d.hotSpotMultiple));
-        s.add(line("real discount rate (% per year)", fmt(discountRatePercent)
-                + (usesDefaultDiscountRate() ? " (" + PresentValue.DEFAULT_RATE_RULE + ")" : ""), usesDefaultDiscountRate()));
+        s.add(line("real discount rate (% per year)", discountRateEntered ? fmt(discountRatePercent)
+                : "the price book's rate; " + fmt(discountRatePercent) + " (" + PresentValue.DEFAULT_RATE_RULE
+                        + ") with the invented example book", !discountRateEntered));
         s.add(line("accuracy range", accuracy.lowPercent() + " % / +" + accuracy.highPercent() + " % (" + accuracy.source()
                 + ")", accuracy == d.accuracy));
-        s.add(line("capital markups", capitalMarkups == null ? "example markups with the invented example book, none otherwise"
+        s.add(line("capital markups", capitalMarkups == null ? "the price book's markups (invented ones with the invented example book)"
                 : capitalMarkups.toString(), capitalMarkups == null));
-        s.add(line("O&M markups", operatingMarkups == null ? "example markups with the invented example book, none otherwise"
+        s.add(line("O&M markups", operatingMarkups == null ? "the price book's markups (invented ones with the invented example book)"
                 : operatingMarkups.toString(), operatingMarkups == null));
         s.add(line("extraction-to-injection ratio (dimensionless)", fmt(extractionToInjectionRatio),
                 extractionToInjectionRatio == d.extractionToInjectionRatio));
@@ -414,6 +429,7 @@ public final class DesignSettings {
         private int enlargementCellsPerAxis = DEFAULT_ENLARGEMENT_CELLS_PER_AXIS;
         private double hotSpotMultiple = DEFAULT_HOT_SPOT_MULTIPLE;
         private double discountRatePercent = PresentValue.DEFAULT_REAL_DISCOUNT_RATE_PERCENT;
+        private boolean discountRateEntered;
         private AccuracyRange accuracy = AccuracyRange.FEASIBILITY_STUDY;
         private CapitalMarkups capitalMarkups;
         private OperatingMarkups operatingMarkups;
@@ -441,6 +457,7 @@ public final class DesignSettings {
             b.enlargementCellsPerAxis = enlargementCellsPerAxis;
             b.hotSpotMultiple = hotSpotMultiple;
             b.discountRatePercent = discountRatePercent;
+            b.discountRateEntered = discountRateEntered;
             b.accuracy = accuracy;
             b.capitalMarkups = capitalMarkups;
             b.operatingMarkups = operatingMarkups;
@@ -529,9 +546,13 @@ public final class DesignSettings {
             return this;
         }
 
-        /** Real discount rate, % per year. */
+        /**
+         * Real discount rate, % per year; once set it wins over the rate of a project's price book
+         * (see {@link DesignSettings#discountRateEntered()}).
+         */
         public Builder discountRatePercent(double value) {
             discountRatePercent = value;
+            discountRateEntered = true;
             return this;
         }
 

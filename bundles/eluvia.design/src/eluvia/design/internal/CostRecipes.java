@@ -17,6 +17,7 @@ import eluvia.cost.FlushingQuantities;
 import eluvia.cost.OperatingMarkups;
 import eluvia.cost.OperatingPeriod;
 import eluvia.cost.PriceBook;
+import eluvia.cost.PresentValue;
 import eluvia.cost.PriceItem;
 import eluvia.cost.Quantity;
 import eluvia.cost.QuantitySet;
@@ -34,6 +35,13 @@ import eluvia.site.model.Project;
  * unpriced. Rates are marked invented when their source note or the book's reference says
  * "invented". Without a price book the invented example book of eluvia.cost prices everything,
  * marked invented in every output.
+ *
+ * <p>Markups and the discount rate: a project's price book carries its own contingency and
+ * professional-services percentages (EPA 540-R-00-002 layout: contingency on the subtotal,
+ * services on the subtotal plus contingency) and its real discount rate with the rule it follows;
+ * they price every alternative costed from that book unless {@link DesignSettings} sets markups or
+ * a rate for the run. The invented example book keeps its own invented markups and the default
+ * rate. Every estimate's notes state which applied.
  */
 public final class CostRecipes {
 
@@ -100,8 +108,21 @@ public final class CostRecipes {
      * @param example whether it is the invented example book of eluvia.cost (the project has none)
      * @param invented whether any of its rates is invented
      * @param source where it comes from, for results
+     * @param capitalMarkups the book's capital markups (the example book's invented ones for the example)
+     * @param operatingMarkups the book's O&amp;M markups (the example book's invented ones for the example)
+     * @param discountRatePercent the book's real discount rate, % per year (the default 7 for the example)
+     * @param discountRateBasis which rule the book's rate follows, in words (never null)
      */
-    public record BookChoice(PriceBook book, boolean example, boolean invented, String source) {
+    public record BookChoice(PriceBook book, boolean example, boolean invented, String source,
+            CapitalMarkups capitalMarkups, OperatingMarkups operatingMarkups, double discountRatePercent,
+            String discountRateBasis) {
+
+        /** A book with no markups and the default rate (for callers that build one by hand). */
+        public BookChoice(PriceBook book, boolean example, boolean invented, String source) {
+            this(book, example, invented, source, example ? ExamplePriceBook.capitalMarkups() : CapitalMarkups.none(),
+                    example ? ExamplePriceBook.operatingMarkups() : OperatingMarkups.none(),
+                    PresentValue.DEFAULT_REAL_DISCOUNT_RATE_PERCENT, PresentValue.DEFAULT_RATE_RULE);
+        }
     }
 
     /**
@@ -169,7 +190,33 @@ public final class CostRecipes {
         String source = "the project's price book '" + emf.getName() + "'"
                 + (emf.getReference() == null || emf.getReference().isBlank() ? "" : " (" + emf.getReference() + ")")
                 + (anyInvented ? ": its rates are marked INVENTED" : "");
-        return new BookChoice(new PriceBook(emf.getName(), currency, items), false, anyInvented, source);
+        CapitalMarkups capital = new CapitalMarkups(percent(emf, label, "scopeContingencyPercent", emf.getScopeContingencyPercent()),
+                percent(emf, label, "bidContingencyPercent", emf.getBidContingencyPercent()),
+                percent(emf, label, "projectManagementPercent", emf.getProjectManagementPercent()),
+                percent(emf, label, "remedialDesignPercent", emf.getRemedialDesignPercent()),
+                percent(emf, label, "constructionManagementPercent", emf.getConstructionManagementPercent()));
+        OperatingMarkups operating = new OperatingMarkups(
+                percent(emf, label, "operatingContingencyPercent", emf.getOperatingContingencyPercent()),
+                percent(emf, label, "operatingProjectManagementPercent", emf.getOperatingProjectManagementPercent()),
+                percent(emf, label, "technicalSupportPercent", emf.getTechnicalSupportPercent()));
+        double ratePercent = emf.getDiscountRatePercent();
+        if (!(ratePercent >= -5 && ratePercent <= 30)) {
+            throw DesignInputException.of(emf, label, "discountRatePercent", ratePercent, "-5 to 30 % per year",
+                    "enter the real discount rate in % per year (7 for 7 %)");
+        }
+        String basis = emf.getDiscountRateBasis() == null || emf.getDiscountRateBasis().isBlank()
+                ? (ratePercent == PresentValue.DEFAULT_REAL_DISCOUNT_RATE_PERCENT ? PresentValue.DEFAULT_RATE_RULE
+                        : "no basis stated in the price book")
+                : emf.getDiscountRateBasis().trim();
+        return new BookChoice(new PriceBook(emf.getName(), currency, items), false, anyInvented, source, capital, operating,
+                ratePercent, basis);
+    }
+
+    private static double percent(eluvia.site.model.PriceBook emf, String label, String field, double valuePercent) {
+        if (!(valuePercent >= 0 && valuePercent <= 100)) {
+            throw DesignInputException.of(emf, label, field, valuePercent, "0 to 100 %", "enter per cent (15 for 15 %), 0 for none");
+        }
+        return valuePercent;
     }
 
     private static boolean contains(String text, String word) {
@@ -268,16 +315,38 @@ public final class CostRecipes {
         }
         CapitalMarkups cm = settings.capitalMarkups();
         OperatingMarkups om = settings.operatingMarkups();
+        String bookName = "price book '" + choice.book().name() + "'";
         if (cm == null) {
-            cm = choice.example() ? ExamplePriceBook.capitalMarkups() : CapitalMarkups.none();
+            cm = choice.example() ? ExamplePriceBook.capitalMarkups() : choice.capitalMarkups();
             notes.add(choice.example() ? "Capital markups: the example's INVENTED markups (" + cm + ")."
-                    : "Capital markups: none (the project file has no contingency or professional-services percentages; "
-                            + "set them for the run, or the estimate understates the capital cost).");
+                    : cm.equals(CapitalMarkups.none())
+                            ? "Capital markups: none (" + bookName + " enters no contingency or professional-services "
+                                    + "percentages; the estimate understates the capital cost unless that is intended)."
+                            : "Capital markups: from " + bookName + " (" + cm + ").");
+        } else {
+            notes.add("Capital markups: set for this run (" + cm + "), not the price book's.");
         }
         if (om == null) {
-            om = choice.example() ? ExamplePriceBook.operatingMarkups() : OperatingMarkups.none();
+            om = choice.example() ? ExamplePriceBook.operatingMarkups() : choice.operatingMarkups();
             notes.add(choice.example() ? "O&M markups: the example's INVENTED markups (" + om + ")."
-                    : "O&M markups: none (the project file has no O&M contingency or support percentages).");
+                    : om.equals(OperatingMarkups.none())
+                            ? "O&M markups: none (" + bookName + " enters no O&M contingency or support percentages)."
+                            : "O&M markups: from " + bookName + " (" + om + ").");
+        } else {
+            notes.add("O&M markups: set for this run (" + om + "), not the price book's.");
+        }
+        double ratePercent;
+        if (settings.discountRateEntered()) {
+            ratePercent = settings.discountRatePercent();
+            notes.add("Discount rate: " + ratePercent + " % per year (real), set for this run"
+                    + (choice.example() ? "." : ", not the rate of " + bookName + "."));
+        } else if (choice.example()) {
+            ratePercent = settings.discountRatePercent();
+            notes.add(sentence("Discount rate: " + ratePercent + " % per year (real): " + PresentValue.DEFAULT_RATE_RULE));
+        } else {
+            ratePercent = choice.discountRatePercent();
+            notes.add(sentence("Discount rate: " + ratePercent + " % per year (real) from " + bookName + ": "
+                    + choice.discountRateBasis()));
         }
         if (!unpriced.isEmpty()) {
             notes.add(unpriced.size() + " cost item(s) are not in the price book and are left out: the estimate "
@@ -286,10 +355,14 @@ public final class CostRecipes {
         if (lines == 0) {
             return new Priced(null, unpriced, notes);
         }
-        b.capitalMarkups(cm).operatingMarkups(om).discountRatePercent(settings.discountRatePercent())
+        b.capitalMarkups(cm).operatingMarkups(om).discountRatePercent(ratePercent)
                 .accuracy(settings.accuracy()).operatingPeriod(kind == AlternativeKind.EXCAVATION ? OperatingPeriod.fixed(0)
                         : OperatingPeriod.fromQuantity(FlushingQuantities.OPERATING_YEARS));
         return new Priced(b.build(), unpriced, notes);
+    }
+
+    private static String sentence(String text) {
+        return text.endsWith(".") ? text : text + ".";
     }
 
     private static PriceItem find(PriceBook book, Role role) {
