@@ -324,6 +324,7 @@ public final class Messages extends NLS {
     public static String PriceItem_code;
     public static String PriceItem_currency;
     public static String PriceItem_name;
+    public static String PriceItem_perUnit;
     public static String PriceItem_rate;
     public static String PriceItem_source;
     public static String PriceItem_unit;
@@ -412,6 +413,7 @@ public final class Messages extends NLS {
     public static String UncertaintyPage_distribution;
     public static String UncertaintyPage_enabled;
     public static String UncertaintyPage_feature;
+    public static String UncertaintyPage_fieldUnit;
     public static String UncertaintyPage_first;
     public static String UncertaintyPage_gsd;
     public static String UncertaintyPage_inputs;

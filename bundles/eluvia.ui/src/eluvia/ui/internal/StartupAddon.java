@@ -31,6 +31,14 @@ import jakarta.inject.Inject;
  */
 public final class StartupAddon {
 
+    static {
+        // Charts and the design package are drawn off screen with AWT: keep AWT from opening a
+        // display connection of its own beside SWT's.
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
+    }
+
     @Inject
     private MApplication app;
     @Inject

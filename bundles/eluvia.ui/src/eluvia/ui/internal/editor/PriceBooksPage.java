@@ -74,7 +74,7 @@ final class PriceBooksPage extends MasterDetailPage<PriceBook> {
                 () -> SiteFactory.eINSTANCE.createPriceItem(),
                 t -> t.text(P.getPriceItem_Code(), Messages.PriceItem_code).text(P.getPriceItem_Name(), Messages.PriceItem_name)
                         .text(P.getPriceItem_Unit(), Messages.PriceItem_unit)
-                        .number(P.getPriceItem_RatePerUnit(), NumberSpec.fixed(Messages.PriceItem_rate, "per unit", Range.nonNegative()))
+                        .number(P.getPriceItem_RatePerUnit(), NumberSpec.fixed(Messages.PriceItem_rate, Messages.PriceItem_perUnit, Range.nonNegative()))
                         .text(P.getPriceItem_Currency(), Messages.PriceItem_currency)
                         .text(P.getPriceItem_SourceNote(), Messages.PriceItem_source));
     }

@@ -49,7 +49,7 @@ import eluvia.ui.internal.uncertainty.UncertaintySetup;
 final class UncertaintyPage extends EditorPage {
 
     private static final SitePackage P = SitePackage.eINSTANCE;
-    private static final String FIELD_UNIT = "SI unit of the field";
+    private static final String FIELD_UNIT = Messages.UncertaintyPage_fieldUnit;
     private Composite parent;
     private ScrolledComposite area;
     private final List<ObjectTable<?>> tables = new ArrayList<>();

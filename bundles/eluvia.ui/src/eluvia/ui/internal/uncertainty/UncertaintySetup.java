@@ -56,7 +56,7 @@ public final class UncertaintySetup {
                 { "CubicMetres", "m3" }, { "KgPerCubicMetre", "kg/m3" }, { "KilogramsPerCubicMetre", "kg/m3" },
                 { "LitresPerKg", "L/kg" }, { "MilligramsPerKg", "mg/kg" }, { "MilligramsPerLitre", "mg/L" },
                 { "LitresPerMilligram", "L/mg" }, { "Kilograms", "kg" }, { "PerDay", "1/d" }, { "Days", "d" },
-                { "Metres", "m" }, { "PerUnit", "per unit" } };
+                { "Metres", "m" }, { "PerUnit", Messages.PriceItem_perUnit } };
         for (String[] s : suffixes) {
             if (f.endsWith(s[0])) {
                 return s[1];
