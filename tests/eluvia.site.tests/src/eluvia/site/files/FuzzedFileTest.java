@@ -60,7 +60,9 @@ final class FuzzedFileTest {
         int loaded = counts[0];
         int refused = counts[1];
         assertEquals(CASES, loaded + refused);
-        assertTrue(refused > CASES / 10 && loaded > CASES / 20, "mutations too weak or too strong: loaded " + loaded
+        // At least 1 % must load, so that the loader and not only the parser is exercised; the share
+        // depends on the example file, so the bound keeps a wide margin.
+        assertTrue(refused > CASES / 10 && loaded > CASES / 100, "mutations too weak or too strong: loaded " + loaded
                 + ", refused " + refused);
         assertTrue(System.nanoTime() - start < Duration.ofSeconds(90).toNanos(), "the fuzz run is too slow");
     }
