@@ -462,7 +462,7 @@ public final class ResultsJson {
         }
         j.endArray();
         j.field("operatingYears", e.operatingYears()).field("discountRatePercent", e.discountRatePercent())
-                .field("discountRateRule", e.recipe().usesDefaultDiscountRate() ? PresentValue.DEFAULT_RATE_RULE : "user input")
+                .field("discountRateRule", e.recipe().usesDefaultDiscountRate() ? PresentValue.DEFAULT_RATE_RULE : "entered (its basis is in the alternative's notes)")
                 .field("seriesFactorPA", e.seriesFactor())
                 .field("presentValueOfAnnual", e.presentValueOfAnnual().amount())
                 .field("presentValueOfPeriodic", e.presentValueOfPeriodic().amount())
