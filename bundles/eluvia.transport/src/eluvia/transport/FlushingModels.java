@@ -18,8 +18,9 @@ public final class FlushingModels {
      * Exact finite-layer solution: flux (third-type) inlet, zero-gradient outlet, layer initially
      * at Ci, clean inflow; the Brenner (1962) series in the initial-value form of van Genuchten and
      * Alves (1982), with the semi-infinite flux-inlet solution (Lindstrom et al. 1967) plus one
-     * outlet reflection at early times and large P; the maximum residual is found by a profile
-     * search. Decay multiplies every criterion by exp(-k T). Falls back to plug flow when the
+     * outlet reflection at early times and large P; the maximum residual is the outlet value (by
+     * the maximum principle the profile never falls with depth; the tests check it against a
+     * profile search). Decay multiplies every criterion by exp(-k T). Falls back to plug flow when the
      * Peclet number is infinite (no dispersion).
      */
     public static FlushingModel finiteLayer(LayerTransport t) {

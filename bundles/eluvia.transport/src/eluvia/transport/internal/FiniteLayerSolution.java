@@ -1,8 +1,7 @@
 package eluvia.transport.internal;
 
+import java.util.Arrays;
 import java.util.function.DoubleUnaryOperator;
-
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
 /**
  * Exact equilibrium solution for flushing a finite layer: a layer 0 &le; X &le; 1 initially at
@@ -38,12 +37,25 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
  * exp(P (2 - tau)/4) is at most exp(12) and b^2 tau / P grows fast enough that a few tens of
  * roots suffice. The mean of the image form is exact for the semi-infinite part,
  * 1 - integral(A_semi) = 1/2 (1 - tau) erfc((tau - 1)/a) + 1/2 (1 + tau) exp(P) erfc((1 + tau)/a),
- * and integrates the reflection term (which lives in a boundary layer of width about
- * 2 tau / P at the outlet) by Gauss-Legendre quadrature on panels of that width.
+ * and for the reflection term, whose integral over the layer is elementary in erf and exp:
+ * with z = u/a an antiderivative in u is
+ * <pre>
+ *   G(u) = sqrt(P tau/pi) (u + P u^2/6 + 2 tau/3) exp(P - z^2) - (tau + P u^2/2 + P tau u/2 + P^2 u^3/12) exp(P) erfc(z)
+ * </pre>
+ * and the layer integral is G(2 + tau) - G(1 + tau). Its leading asymptotic terms cancel; they
+ * are removed analytically with k(z) = j(z) + 3/(4 z^4) (see {@link #reflectionIntegral}).
+ * The earlier Gauss-Legendre quadrature of the reflection term is kept as
+ * {@link #reflectionIntegralByQuadrature} for the tests.
  *
- * <p>The profile maximum is found by {@link ProfileMaximum}; the maximum principle puts it at
- * the outlet for this problem (dc/dX satisfies the same equation, is 0 at the outlet and P c
- * &ge; 0 at the inlet), which the tests confirm.
+ * <p>Roots: the m-th root is b = (m-1) pi + theta with theta = arccot((b^2 - P^2/4) / (P b)) in
+ * (0, pi); it is found by Newton's method on that fixed-point form, kept inside ((m-1) pi, m pi)
+ * by bisection steps, and the roots and the per-root coefficients of the effluent and mean series
+ * are cached.
+ *
+ * <p>Maximum: the maximum principle puts the largest residual at the outlet for this problem
+ * (dc/dX satisfies the same equation, is 0 at the outlet and P c &ge; 0 at the inlet), so
+ * {@link #maximum} is the outlet value; {@link #searchedMaximum} finds it by a profile search
+ * ({@link ProfileMaximum}) without that assumption, and the tests check the two agree.
  */
 public final class FiniteLayerSolution {
     /** The image form is used when P &ge; this number times tau. */
@@ -62,8 +74,26 @@ public final class FiniteLayerSolution {
         0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.3626837833783620,
         0.3626837833783620, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763 };
 
+    /** Argument of k(z) from which the continued fraction is used. */
+    static final double CONTINUED_FRACTION_FROM = 3;
+    /** Terms of the continued fraction of erfcx. */
+    static final int CONTINUED_FRACTION_TERMS = 40;
+
+    /** Roots computed at first use (more are added as a series needs them). */
+    private static final int FIRST_ROOTS = 16;
+
     private final double peclet;
-    private volatile double[] roots = new double[0];
+    private volatile Roots roots = new Roots(new double[0], new double[0], new double[0], new double[0]);
+
+    /**
+     * The roots b_m, b_m^2 / P, and the effluent and mean coefficients of each root (immutable; a
+     * longer set replaces the whole object, so readers never see a half-built one).
+     */
+    private record Roots(double[] b, double[] decay, double[] effluent, double[] mean) {
+        int size() {
+            return b.length;
+        }
+    }
 
     /** @param peclet P = v L / D, finite and greater than 0 */
     public FiniteLayerSolution(double peclet) {
@@ -106,8 +136,16 @@ public final class FiniteLayerSolution {
         return usesImageForm(tau) ? imageMean(tau) : seriesMean(tau);
     }
 
-    /** Largest remaining fraction anywhere in the layer, found by a profile search. */
+    /**
+     * Largest remaining fraction anywhere in the layer: the outlet value, by the maximum principle
+     * (class comment); {@link #searchedMaximum} checks it.
+     */
     public double maximum(double tau) {
+        return effluent(tau);
+    }
+
+    /** Largest remaining fraction anywhere in the layer, found by a profile search without assuming where it is. */
+    public double searchedMaximum(double tau) {
         if (tau == 0) {
             return 1;
         }
@@ -126,22 +164,35 @@ public final class FiniteLayerSolution {
         });
     }
 
-    /** The Brenner series for the effluent. */
+    /** The Brenner series for the effluent (coefficients 2 b sin b / (b^2 + P^2/4 + P), cached per root). */
     public double seriesEffluent(double tau) {
-        double p = peclet;
-        double quarter = p * p / 4;
-        return sumSeries(tau, p / 2, Math.max(1, 1 / Math.sqrt(p)),
-                b -> 2 * b * Math.sin(b) / (b * b + quarter + p));
+        return sumCached(tau, Math.max(1, 1 / Math.sqrt(peclet)), true);
     }
 
-    /** The Brenner series for the mean over the layer. */
+    /** The Brenner series for the mean over the layer (coefficients cached per root). */
     public double seriesMean(double tau) {
+        return sumCached(tau, 2, false);
+    }
+
+    /** {@link #sumSeries} for the outlet (shift P/2) with the coefficients cached per root. */
+    private double sumCached(double tau, double amplitude, boolean effluent) {
         double p = peclet;
-        double quarter = p * p / 4;
-        return sumSeries(tau, p / 2, 2, b -> {
-            double s = b * b + quarter;
-            return 2 * p * b * Math.sin(b) / (s * (s + p));
-        });
+        double base = p / 2 - p * tau / 4;
+        Roots r = roots;
+        double sum = 0;
+        for (int m = 1; m <= MAX_ROOTS; m++) {
+            if (m > r.size()) {
+                r = growRoots(m);
+            }
+            double exponent = base - r.decay[m - 1] * tau;
+            double e = Math.exp(exponent);
+            if (exponent < LOG_SMALLEST || (m > 1 && amplitude * e < 1e-17 * Math.abs(sum))) {
+                return sum;
+            }
+            sum += (effluent ? r.effluent[m - 1] : r.mean[m - 1]) * e;
+        }
+        throw new IllegalStateException("Brenner series did not converge in " + MAX_ROOTS
+                + " terms at Peclet number " + p + ", retarded time " + tau);
     }
 
     /**
@@ -168,35 +219,72 @@ public final class FiniteLayerSolution {
 
     /** The m-th root (m &ge; 1) of b cot b - b^2/P + P/4 = 0, in ((m-1) pi, m pi). */
     public double root(int m) {
-        double[] r = roots;
-        if (m <= r.length) {
-            return r[m - 1];
+        Roots r = roots;
+        if (m <= r.size()) {
+            return r.b[m - 1];
         }
-        return growRoots(m)[m - 1];
+        return growRoots(m).b[m - 1];
     }
 
-    private synchronized double[] growRoots(int m) {
-        double[] r = roots;
-        if (m <= r.length) {
+    private synchronized Roots growRoots(int m) {
+        Roots r = roots;
+        if (m <= r.size()) {
             return r;
         }
-        int n = Math.max(m, Math.max(32, 2 * r.length));
-        double[] grown = java.util.Arrays.copyOf(r, n);
-        BrentSolver solver = new BrentSolver(1e-16, 1e-300, 0);
+        int n = Math.max(m, Math.max(FIRST_ROOTS, 2 * r.size()));
         double p = peclet;
-        // cos b + (P/4 - b^2/P) sin(b)/b: the root equation times sin(b)/P, finite at b = 0
-        // and of opposite signs at (m-1) pi and m pi.
-        org.apache.commons.math3.analysis.UnivariateFunction f = b -> {
-            double sinc = b == 0 ? 1 : Math.sin(b) / b;
-            return Math.cos(b) + (p / 4 - b * b / p) * sinc;
-        };
-        for (int k = r.length; k < n; k++) {
-            double lo = k * Math.PI;
-            double hi = (k + 1) * Math.PI;
-            grown[k] = solver.solve(200, f, lo, hi);
+        double quarter = p * p / 4;
+        double[] b = Arrays.copyOf(r.b, n);
+        double[] decay = Arrays.copyOf(r.decay, n);
+        double[] effluent = Arrays.copyOf(r.effluent, n);
+        double[] mean = Arrays.copyOf(r.mean, n);
+        for (int k = r.size(); k < n; k++) {
+            double x = newtonRoot(k + 1, p);
+            double s = x * x + quarter;
+            double sin = Math.sin(x);
+            b[k] = x;
+            decay[k] = x * x / p;
+            effluent[k] = 2 * x * sin / (s + p);
+            mean[k] = 2 * p * x * sin / (s * (s + p));
         }
+        Roots grown = new Roots(b, decay, effluent, mean);
         roots = grown;
         return grown;
+    }
+
+    /**
+     * The m-th root by Newton's method on g(b) = b - (m-1) pi - atan2(1, q(b)), q(b) = b/P - P/(4 b):
+     * g rises (g' = 1 + q'/(1 + q^2) &ge; 1, q' = 1/P + P/(4 b^2)) from -pi or less at (m-1) pi to
+     * 0 or more at m pi; a step that leaves the bracket is replaced by bisection.
+     */
+    static double newtonRoot(int m, double p) {
+        double start = (m - 1) * Math.PI;
+        double lo = start;
+        double hi = m * Math.PI;
+        double mid = start + Math.PI / 2;
+        double x = start + Math.atan2(1, mid / p - p / (4 * mid));
+        for (int i = 0; i < 100; i++) {
+            double q = x / p - p / (4 * x);
+            double g = x - start - Math.atan2(1, q);
+            if (g == 0) {
+                return x;
+            }
+            if (g < 0) {
+                lo = x;
+            } else {
+                hi = x;
+            }
+            double slope = 1 + (1 / p + p / (4 * x * x)) / (1 + q * q);
+            double next = x - g / slope;
+            if (!(next > lo && next < hi)) {
+                next = lo + (hi - lo) / 2;
+            }
+            if (Math.abs(next - x) <= 2e-16 * x || next == lo || next == hi) {
+                return next;
+            }
+            x = next;
+        }
+        return x;
     }
 
     // ---------------------------------------------------------------- image form
@@ -250,8 +338,76 @@ public final class FiniteLayerSolution {
         return Math.sqrt(p * tau) / SQRT_PI * Math.exp(-bigDelta) * bracket;
     }
 
-    /** Integral over the layer of the reflection term, by 8-point Gauss-Legendre panels from the outlet. */
+    /**
+     * Integral over the layer of the reflection term, G(2 + tau) - G(1 + tau) with the
+     * antiderivative G of the class comment. With S = sqrt(P tau/pi), erfcx(z) = (1 - h(z)) /
+     * (sqrt(pi) z), h(z) = 1/(2 z^2) + j(z) and j(z) = -3/(4 z^4) + k(z), the bracket of
+     * exp(P - z^2) is S [-8 tau^2/(P^2 u^3) - 12 tau^3/(P^2 u^4) - 24 tau^3/(P^3 u^5)
+     * + k(z) (2 tau/(P u) + u + tau + P u^2/6)], whose terms are all of the size of the result.
+     */
     double reflectionIntegral(double tau) {
+        return antiderivative(0, tau) - antiderivative(1, tau);
+    }
+
+    /**
+     * exp(P) G(u) at depth X (u = 2 - X + tau) for the reflection integral, with Delta = z^2 - P
+     * formed as in {@link #reflection} without cancellation.
+     */
+    private double antiderivative(double depth, double tau) {
+        double p = peclet;
+        double u = 2 - depth + tau;
+        double gap = 2 - depth - tau;
+        double bigDelta = p * (gap * gap + 4 * tau * (1 - depth)) / (4 * tau);
+        if (bigDelta > -LOG_SMALLEST) {
+            return 0;
+        }
+        double z = u / (2 * Math.sqrt(tau / p));
+        double pu = p * u;
+        double t2 = tau * tau;
+        double bracket = -8 * t2 / (pu * pu * u) - 12 * t2 * tau / (pu * pu * u * u)
+                - 24 * t2 * tau / (pu * pu * pu * u * u)
+                + k(z) * (2 * tau / pu + u + tau + pu * u / 6);
+        return Math.sqrt(p * tau) / SQRT_PI * Math.exp(-bigDelta) * bracket;
+    }
+
+    /**
+     * k(z) = j(z) + 3/(4 z^4), which falls like 15/(8 z^6). From z = 8 on: the asymptotic series
+     * sum_{n &ge; 3} -(-1)^n (2n-1)!!/(2 z^2)^n (Abramowitz and Stegun 1964, 7.1.23). From
+     * {@value #CONTINUED_FRACTION_FROM} to 8: h(z) = K/(z + K) from the continued fraction
+     * sqrt(pi) erfcx(z) = 1/(z + K), K = (1/2)/(z + 1/(z + (3/2)/(z + 2/(z + ...)))) (Abramowitz
+     * and Stegun 1964, 7.1.4), {@value #CONTINUED_FRACTION_TERMS} terms, so h keeps its relative
+     * precision and only the two subtractions lose digits (a factor of about z^4/4). Below that:
+     * {@link ErrorFunctions#j} (not reached by the image form, where z &ge; sqrt(12)).
+     */
+    static double k(double z) {
+        double z2 = z * z;
+        if (z < CONTINUED_FRACTION_FROM) {
+            return ErrorFunctions.j(z) + 0.75 / (z2 * z2);
+        }
+        if (z < 8) {
+            double tail = 0;
+            for (int n = CONTINUED_FRACTION_TERMS; n >= 1; n--) {
+                tail = 0.5 * n / (z + tail);
+            }
+            double h = tail / (z + tail);
+            return h - 0.5 / z2 + 0.75 / (z2 * z2);
+        }
+        double x = 1 / (2 * z * z);
+        double term = 15 * x * x * x;
+        double sum = 0;
+        for (int n = 3; n < 43; n++) {
+            sum += term;
+            double next = -term * (2 * n + 1) * x;
+            if (Math.abs(next) < 1e-17 * Math.abs(sum)) {
+                break;
+            }
+            term = next;
+        }
+        return sum;
+    }
+
+    /** Integral over the layer of the reflection term, by 8-point Gauss-Legendre panels from the outlet. */
+    double reflectionIntegralByQuadrature(double tau) {
         double width = 2 * tau / (peclet * (1 + tau));
         int panels = (int) Math.min(40, Math.ceil(1 / width));
         width = Math.min(width, 1.0 / panels);
