@@ -70,6 +70,26 @@ final class PriceBooksPage extends MasterDetailPage<PriceBook> {
         b.text(form, book, P.getPriceBook_Name(), Messages.PriceBook_name, false);
         b.text(form, book, P.getPriceBook_Currency(), Messages.PriceBook_currency, false);
         b.text(form, book, P.getPriceBook_Reference(), Messages.PriceBook_reference, true);
+        Forms.heading(form, Messages.PriceBook_markupsHeading, 2);
+        Forms.note(form, Messages.PriceBook_markupsNote, 2);
+        Range percent = Range.of(0, true, 100, true);
+        b.number(form, book, P.getPriceBook_ScopeContingencyPercent(), NumberSpec.fixed(Messages.PriceBook_scope, "%", percent));
+        b.number(form, book, P.getPriceBook_BidContingencyPercent(), NumberSpec.fixed(Messages.PriceBook_bid, "%", percent));
+        b.number(form, book, P.getPriceBook_ProjectManagementPercent(),
+                NumberSpec.fixed(Messages.PriceBook_projectManagement, "%", percent));
+        b.number(form, book, P.getPriceBook_RemedialDesignPercent(),
+                NumberSpec.fixed(Messages.PriceBook_remedialDesign, "%", percent));
+        b.number(form, book, P.getPriceBook_ConstructionManagementPercent(),
+                NumberSpec.fixed(Messages.PriceBook_constructionManagement, "%", percent));
+        b.number(form, book, P.getPriceBook_OperatingContingencyPercent(),
+                NumberSpec.fixed(Messages.PriceBook_operatingContingency, "%", percent));
+        b.number(form, book, P.getPriceBook_OperatingProjectManagementPercent(),
+                NumberSpec.fixed(Messages.PriceBook_operatingProjectManagement, "%", percent));
+        b.number(form, book, P.getPriceBook_TechnicalSupportPercent(),
+                NumberSpec.fixed(Messages.PriceBook_technicalSupport, "%", percent));
+        b.number(form, book, P.getPriceBook_DiscountRatePercent(),
+                NumberSpec.fixed(Messages.PriceBook_discountRate, "% per year", Range.of(-5, true, 30, true)));
+        b.text(form, book, P.getPriceBook_DiscountRateBasis(), Messages.PriceBook_discountRateBasis, false);
         nestedList(form, Messages.PriceBook_itemsHeading, book, P.getPriceBook_Items(),
                 () -> SiteFactory.eINSTANCE.createPriceItem(),
                 t -> t.text(P.getPriceItem_Code(), Messages.PriceItem_code).text(P.getPriceItem_Name(), Messages.PriceItem_name)
