@@ -92,14 +92,16 @@ public final class DesignPipeline {
      * Runs the pipeline.
      *
      * @param project the project
-     * @param settings the run's settings ({@link DesignSettings#defaults()} for the stated defaults)
+     * @param requested the run's settings ({@link DesignSettings#defaults()} for the stated defaults); the
+     *        zone-analysis settings the caller did not set are taken from the project when it has them
+     *        ({@link DesignSettings#resolvedFor(Project)}), and the run's notes and settings say so
      * @param progress receives progress and may cancel ({@link DesignProgress#NONE} for none)
      * @throws DesignInputException when the project or the settings have errors; it carries every problem
      * @throws DesignCancelledException when the progress receiver asked the run to stop
      */
-    public static DesignRun run(Project project, DesignSettings settings, DesignProgress progress) {
+    public static DesignRun run(Project project, DesignSettings requested, DesignProgress progress) {
         Instant started = Instant.now();
-        if (settings == null) {
+        if (requested == null) {
             throw DesignInputException.of(null, "Design settings", "settings", "null", "settings",
                     "pass DesignSettings.defaults()");
         }
@@ -111,6 +113,7 @@ public final class DesignPipeline {
         if (!errors.isEmpty()) {
             throw new DesignInputException(errors);
         }
+        DesignSettings settings = requested.resolvedFor(project);
         RunProgress rp = new RunProgress(progress, units(project, settings));
         List<String> notes = new ArrayList<>();
 

@@ -2,8 +2,10 @@ package eluvia.design;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 
 import eluvia.cost.AccuracyRange;
 import eluvia.cost.CapitalMarkups;
@@ -12,12 +14,20 @@ import eluvia.cost.OperatingMarkups;
 import eluvia.cost.PresentValue;
 import eluvia.zone.NonDetectRule;
 import eluvia.zone.SampleSet;
+import eluvia.site.model.Project;
+import eluvia.site.model.ZoneAnalysisSettings;
+import eluvia.zone.InverseDistanceWeighting;
+import eluvia.zone.OrdinaryKriging;
 import eluvia.zone.VariogramModel;
+import eluvia.zone.VariogramShape;
 
 /**
- * The choices of a pipeline run that the project file does not hold, each with a stated default.
- * Every result lists the settings it was computed with ({@link #describe()}), and says which of
- * them are defaults, so that a reviewer sees every assumption.
+ * The choices of a pipeline run, each with a stated default. The zone-analysis choices can also be
+ * project data (eluvia.site {@code ZoneAnalysisSettings}): {@link #resolvedFor(Project)} takes each
+ * of them from the project unless the caller set it on the {@link Builder}, so a value set for a
+ * run wins over the project's, and the project's over the default. Every result lists the settings
+ * it was computed with ({@link #describe()}), and says of each whether it is the default, came from
+ * the project or was set for the run, so that a reviewer sees every assumption.
  *
  * <p>Units are in the names: metres, metres per day, years, per cent. Dimensionless settings say
  * so below. {@link #defaults()} is what {@link DesignPipeline#run(eluvia.site.model.Project)} uses.
@@ -82,6 +92,7 @@ public final class DesignSettings {
     private final boolean reuseOverburdenAsBackfill;
     private final EarthworkFactors borrowSoil;
     private final boolean pushDownBelowColumn;
+    private final Set<String> fromProject;
     private final Builder source;
 
     private DesignSettings(Builder b) {
@@ -173,6 +184,7 @@ public final class DesignSettings {
             problems.add(problem("borrowSoil", "null", "earthwork factors of the borrow fill", ""));
         }
         pushDownBelowColumn = b.pushDownBelowColumn;
+        fromProject = Set.copyOf(b.fromProject);
         if (!problems.isEmpty()) {
             throw new DesignInputException(problems);
         }
@@ -200,6 +212,133 @@ public final class DesignSettings {
     /** A builder starting from these settings. */
     public Builder toBuilder() {
         return source.copy();
+    }
+
+    /**
+     * The settings a run of this project uses: each zone-analysis setting (estimator, non-detect
+     * rule, vertical distance factor, block sizes, search radius, variogram, delays, transverse
+     * dispersivity fraction, hot-spot multiple) that the caller did not set on the builder is taken
+     * from the project's zone-analysis settings when the project has them; {@link #describe()} then
+     * marks it "from the project". A 0 in the project's search radius, block sizes or variogram
+     * range means the automatic choice, an empty delay list the default delays.
+     *
+     * @param project the project (null or without zone-analysis settings: these settings unchanged)
+     * @throws DesignInputException when a project value is out of range (the message names the
+     *         project's field), or when the project asks for an inverse-distance power or a number of
+     *         neighbours other than the {@value InverseDistanceWeighting#DEFAULT_POWER} and
+     *         {@value InverseDistanceWeighting#DEFAULT_MAX_NEIGHBOURS} the pipeline's zone analysis uses
+     */
+    public DesignSettings resolvedFor(Project project) {
+        ZoneAnalysisSettings z = project == null ? null : project.getZoneAnalysis();
+        if (z == null) {
+            return this;
+        }
+        String label = "Zone analysis settings";
+        List<eluvia.site.validation.Problem> problems = new ArrayList<>();
+        if (z.getInverseDistancePower() != InverseDistanceWeighting.DEFAULT_POWER) {
+            problems.add(new eluvia.site.validation.Problem(eluvia.site.validation.Severity.ERROR, z, label,
+                    "inverseDistancePower", num(z.getInverseDistancePower()),
+                    num(InverseDistanceWeighting.DEFAULT_POWER) + " (the pipeline's zone analysis takes no other power yet)",
+                    "set the power to " + num(InverseDistanceWeighting.DEFAULT_POWER)));
+        }
+        if (z.getMaximumNeighbours() != InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS
+                || z.getMaximumNeighbours() != OrdinaryKriging.DEFAULT_MAX_NEIGHBOURS) {
+            problems.add(new eluvia.site.validation.Problem(eluvia.site.validation.Severity.ERROR, z, label,
+                    "maximumNeighbours", Integer.toString(z.getMaximumNeighbours()),
+                    InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS
+                            + " (the pipeline's zone analysis takes no other number of neighbours yet)",
+                    "set the most neighbours to " + InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS));
+        }
+        if (!problems.isEmpty()) {
+            throw new DesignInputException(problems);
+        }
+        Builder b = source.copy();
+        Set<String> set = source.entered;
+        if (!set.contains("zoneEstimator")) {
+            b.zoneEstimator = ZoneEstimator.valueOf(z.getEstimator().getName());
+            b.fromProject.add("zoneEstimator");
+        }
+        if (!set.contains("nonDetectRule")) {
+            b.nonDetectRule = NonDetectRule.valueOf(z.getNonDetectRule().getName());
+            b.fromProject.add("nonDetectRule");
+        }
+        if (!set.contains("verticalDistanceFactor")) {
+            b.verticalDistanceFactor = z.getVerticalDistanceFactor();
+            b.fromProject.add("verticalDistanceFactor");
+        }
+        if (!set.contains("blockPlanSizeMetres")) {
+            b.blockPlanSizeMetres = z.getBlockPlanSizeMetres() == 0 ? Double.NaN : z.getBlockPlanSizeMetres();
+            b.fromProject.add("blockPlanSizeMetres");
+        }
+        if (!set.contains("blockDepthMetres")) {
+            b.blockDepthMetres = z.getBlockDepthMetres() == 0 ? Double.NaN : z.getBlockDepthMetres();
+            b.fromProject.add("blockDepthMetres");
+        }
+        if (!set.contains("searchRadiusMetres")) {
+            b.searchRadiusMetres = z.getSearchRadiusMetres() == 0 ? Double.NaN : z.getSearchRadiusMetres();
+            b.fromProject.add("searchRadiusMetres");
+        }
+        if (!set.contains("variogram")) {
+            if (z.getVariogramRangeMetres() != 0) {
+                try {
+                    b.variogram = new VariogramModel(VariogramShape.valueOf(z.getVariogramModel().getName()),
+                            z.getVariogramNuggetMgPerKgSquared(), z.getVariogramSillMgPerKgSquared(),
+                            z.getVariogramRangeMetres());
+                } catch (eluvia.zone.ZoneInputException e) {
+                    String field = e.quantity().contains("nugget") ? "variogramNuggetMgPerKgSquared"
+                            : e.quantity().contains("sill") ? "variogramSillMgPerKgSquared" : "variogramRangeMetres";
+                    throw DesignInputException.of(z, label, field, e.value(), e.allowedRange(),
+                            "enter the variogram read from the experimental variogram of the results");
+                }
+            } else {
+                b.variogram = null;
+            }
+            b.fromProject.add("variogram");
+        }
+        if (!set.contains("delayYears")) {
+            double[] delays = z.getDelayYears().stream().mapToDouble(Double::doubleValue).toArray();
+            b.delayYears = delays.length == 0 ? DEFAULT_DELAY_YEARS.clone() : delays;
+            b.fromProject.add("delayYears");
+        }
+        if (!set.contains("transverseDispersivityFraction")) {
+            b.transverseDispersivityFraction = z.getTransverseDispersivityFraction();
+            b.fromProject.add("transverseDispersivityFraction");
+        }
+        if (!set.contains("hotSpotMultiple")) {
+            b.hotSpotMultiple = z.getHotSpotMultiple();
+            b.fromProject.add("hotSpotMultiple");
+        }
+        try {
+            return b.build();
+        } catch (DesignInputException e) {
+            List<eluvia.site.validation.Problem> named = new ArrayList<>();
+            for (eluvia.site.validation.Problem p : e.problems()) {
+                String field = projectField(p.field());
+                named.add(b.fromProject.contains(p.field()) && field != null
+                        ? new eluvia.site.validation.Problem(p.severity(), z, label, field, p.value(), p.allowedRange(), p.fix())
+                        : p);
+            }
+            throw new DesignInputException(named);
+        }
+    }
+
+    /** The project's field of a setting, or null. */
+    private static String projectField(String setting) {
+        return switch (setting) {
+        case "zoneEstimator" -> "estimator";
+        case "variogram" -> "variogramRangeMetres";
+        case "nonDetectRule", "verticalDistanceFactor", "blockPlanSizeMetres", "blockDepthMetres", "searchRadiusMetres",
+                "delayYears", "transverseDispersivityFraction", "hotSpotMultiple" -> setting;
+        default -> null;
+        };
+    }
+
+    /**
+     * Whether a setting came from the project's zone-analysis settings ({@link #resolvedFor(Project)});
+     * the name is the builder method's, e.g. "delayYears".
+     */
+    public boolean fromProject(String settingName) {
+        return fromProject.contains(settingName);
     }
 
     /** Estimator of the block concentrations (default {@link ZoneEstimator#INVERSE_DISTANCE}). */
@@ -359,30 +498,30 @@ public final class DesignSettings {
     public List<String> describe() {
         Builder d = new Builder();
         List<String> s = new ArrayList<>();
-        s.add(line("zone estimator", zoneEstimator.label(), zoneEstimator == d.zoneEstimator));
-        s.add(line("non-detects", nonDetectRule.description(), nonDetectRule == d.nonDetectRule));
-        s.add(line("vertical distance factor (dimensionless)", fmt(verticalDistanceFactor),
+        s.add(line("zoneEstimator", "zone estimator", zoneEstimator.label(), zoneEstimator == d.zoneEstimator));
+        s.add(line("nonDetectRule", "non-detects", nonDetectRule.description(), nonDetectRule == d.nonDetectRule));
+        s.add(line("verticalDistanceFactor", "vertical distance factor (dimensionless)", fmt(verticalDistanceFactor),
                 verticalDistanceFactor == d.verticalDistanceFactor));
-        s.add(line("block plan size (m)", Double.isNaN(blockPlanSizeMetres) ? "automatic" : fmt(blockPlanSizeMetres),
+        s.add(line("blockPlanSizeMetres", "block plan size (m)", Double.isNaN(blockPlanSizeMetres) ? "automatic" : fmt(blockPlanSizeMetres),
                 Double.isNaN(blockPlanSizeMetres)));
-        s.add(line("block depth (m)", Double.isNaN(blockDepthMetres) ? "automatic" : fmt(blockDepthMetres),
+        s.add(line("blockDepthMetres", "block depth (m)", Double.isNaN(blockDepthMetres) ? "automatic" : fmt(blockDepthMetres),
                 Double.isNaN(blockDepthMetres)));
         s.add(line("margin around the samples without a site boundary (m)", fmt(sampleMarginMetres),
                 sampleMarginMetres == d.sampleMarginMetres));
-        s.add(line("search radius (m, scaled)", Double.isNaN(searchRadiusMetres)
+        s.add(line("searchRadiusMetres", "search radius (m, scaled)", Double.isNaN(searchRadiusMetres)
                 ? "automatic: the largest nearest-neighbour distance between sampling locations"
                 : fmt(searchRadiusMetres), Double.isNaN(searchRadiusMetres)));
-        s.add(line("variogram", variogram == null
+        s.add(line("variogram", "variogram", variogram == null
                 ? "spherical, no nugget, sill = sample variance, range = half the largest sample separation (first guess, not fitted)"
                 : variogram.description(), variogram == null));
-        s.add(line("delays (years)", Arrays.toString(delayYears), Arrays.equals(delayYears, DEFAULT_DELAY_YEARS)));
-        s.add(line("transverse / longitudinal dispersivity (dimensionless)", fmt(transverseDispersivityFraction),
+        s.add(line("delayYears", "delays (years)", Arrays.toString(delayYears), Arrays.equals(delayYears, DEFAULT_DELAY_YEARS)));
+        s.add(line("transverseDispersivityFraction", "transverse / longitudinal dispersivity (dimensionless)", fmt(transverseDispersivityFraction),
                 transverseDispersivityFraction == d.transverseDispersivityFraction));
         s.add(line("net infiltration while nothing is done (m/d)", fmt(delayDarcyFluxMetresPerDay),
                 delayDarcyFluxMetresPerDay == d.delayDarcyFluxMetresPerDay));
         s.add(line("enlargement grid cells per axis", Integer.toString(enlargementCellsPerAxis),
                 enlargementCellsPerAxis == d.enlargementCellsPerAxis));
-        s.add(line("hot-spot multiple of the cleanup level (dimensionless)", fmt(hotSpotMultiple),
+        s.add(line("hotSpotMultiple", "hot-spot multiple of the cleanup level (dimensionless)", fmt(hotSpotMultiple),
                 hotSpotMultiple == d.hotSpotMultiple));
         s.add(line("real discount rate (% per year)", discountRateEntered ? fmt(discountRatePercent)
                 : "the price book's rate; " + fmt(discountRatePercent) + " (" + PresentValue.DEFAULT_RATE_RULE
@@ -407,6 +546,10 @@ public final class DesignSettings {
 
     private static String line(String name, String value, boolean isDefault) {
         return name + " = " + value + (isDefault ? " [default]" : " [set for this run]");
+    }
+
+    private String line(String setting, String name, String value, boolean isDefault) {
+        return fromProject.contains(setting) ? name + " = " + value + " [from the project]" : line(name, value, isDefault);
     }
 
     private static String fmt(double v) {
@@ -437,6 +580,10 @@ public final class DesignSettings {
         private boolean reuseOverburdenAsBackfill = true;
         private EarthworkFactors borrowSoil = DEFAULT_BORROW_SOIL;
         private boolean pushDownBelowColumn = true;
+        /** Names of the zone-analysis settings set on this builder: they win over a project's. */
+        private final Set<String> entered = new LinkedHashSet<>();
+        /** Names of the settings taken from a project by {@link DesignSettings#resolvedFor(Project)}. */
+        private final Set<String> fromProject = new LinkedHashSet<>();
 
         private Builder() {
         }
@@ -465,36 +612,43 @@ public final class DesignSettings {
             b.reuseOverburdenAsBackfill = reuseOverburdenAsBackfill;
             b.borrowSoil = borrowSoil;
             b.pushDownBelowColumn = pushDownBelowColumn;
+            b.entered.addAll(entered);
+            b.fromProject.addAll(fromProject);
             return b;
         }
 
         /** The estimator of the block concentrations. */
         public Builder zoneEstimator(ZoneEstimator value) {
             zoneEstimator = value;
+            set("zoneEstimator");
             return this;
         }
 
         /** The value non-detects take. */
         public Builder nonDetectRule(NonDetectRule value) {
             nonDetectRule = value;
+            set("nonDetectRule");
             return this;
         }
 
         /** The vertical distance factor (dimensionless). */
         public Builder verticalDistanceFactor(double value) {
             verticalDistanceFactor = value;
+            set("verticalDistanceFactor");
             return this;
         }
 
         /** Plan size of a block, m (NaN for the automatic choice). */
         public Builder blockPlanSizeMetres(double value) {
             blockPlanSizeMetres = value;
+            set("blockPlanSizeMetres");
             return this;
         }
 
         /** Depth of a block, m (NaN for the automatic choice). */
         public Builder blockDepthMetres(double value) {
             blockDepthMetres = value;
+            set("blockDepthMetres");
             return this;
         }
 
@@ -507,24 +661,28 @@ public final class DesignSettings {
         /** Search radius of the estimators, m (scaled; NaN for the automatic choice, Infinity for none). */
         public Builder searchRadiusMetres(double value) {
             searchRadiusMetres = value;
+            set("searchRadiusMetres");
             return this;
         }
 
         /** The variogram model for kriging (null for the stated default rule). */
         public Builder variogram(VariogramModel value) {
             variogram = value;
+            set("variogram");
             return this;
         }
 
         /** Delays before the remedy starts, years, increasing. */
         public Builder delayYears(double... values) {
             delayYears = values == null ? null : values.clone();
+            set("delayYears");
             return this;
         }
 
         /** Transverse over longitudinal dispersivity (dimensionless). */
         public Builder transverseDispersivityFraction(double value) {
             transverseDispersivityFraction = value;
+            set("transverseDispersivityFraction");
             return this;
         }
 
@@ -543,6 +701,7 @@ public final class DesignSettings {
         /** Hot-spot multiple of the cleanup level (dimensionless). */
         public Builder hotSpotMultiple(double value) {
             hotSpotMultiple = value;
+            set("hotSpotMultiple");
             return this;
         }
 
@@ -596,6 +755,12 @@ public final class DesignSettings {
         public Builder pushDownBelowColumn(boolean value) {
             pushDownBelowColumn = value;
             return this;
+        }
+
+        /** Marks a setting as set for this run: it wins over the project's value and is no longer "from the project". */
+        private void set(String name) {
+            entered.add(name);
+            fromProject.remove(name);
         }
 
         /** Checks every setting and makes the settings. */

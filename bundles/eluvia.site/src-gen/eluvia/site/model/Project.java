@@ -32,6 +32,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link eluvia.site.model.Project#getPriceBooks <em>Price Books</em>}</li>
  *   <li>{@link eluvia.site.model.Project#getColumnTests <em>Column Tests</em>}</li>
  *   <li>{@link eluvia.site.model.Project#getUncertainty <em>Uncertainty</em>}</li>
+ *   <li>{@link eluvia.site.model.Project#getZoneAnalysis <em>Zone Analysis</em>}</li>
  * </ul>
  *
  * @see eluvia.site.model.SitePackage#getProject()
@@ -296,5 +297,30 @@ public interface Project extends EObject {
 	 * @generated
 	 */
 	void setUncertainty(UncertaintySettings value);
+
+	/**
+	 * Returns the value of the '<em><b>Zone Analysis</b></em>' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * How the zone analysis estimates the soil above the cleanup level and after which delays the enlarged zone is computed; none means the stated defaults of the pipeline.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Zone Analysis</em>' containment reference.
+	 * @see #setZoneAnalysis(ZoneAnalysisSettings)
+	 * @see eluvia.site.model.SitePackage#getProject_ZoneAnalysis()
+	 * @model containment="true"
+	 * @generated
+	 */
+	ZoneAnalysisSettings getZoneAnalysis();
+
+	/**
+	 * Sets the value of the '{@link eluvia.site.model.Project#getZoneAnalysis <em>Zone Analysis</em>}' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Zone Analysis</em>' containment reference.
+	 * @see #getZoneAnalysis()
+	 * @generated
+	 */
+	void setZoneAnalysis(ZoneAnalysisSettings value);
 
 } // Project

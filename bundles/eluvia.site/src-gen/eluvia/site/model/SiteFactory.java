@@ -202,6 +202,15 @@ public interface SiteFactory extends EFactory {
 	RankCorrelation createRankCorrelation();
 
 	/**
+	 * Returns a new object of class '<em>Zone Analysis Settings</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Zone Analysis Settings</em>'.
+	 * @generated
+	 */
+	ZoneAnalysisSettings createZoneAnalysisSettings();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

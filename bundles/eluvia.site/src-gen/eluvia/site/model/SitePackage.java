@@ -188,13 +188,22 @@ public interface SitePackage extends EPackage {
 	int PROJECT__UNCERTAINTY = 12;
 
 	/**
+	 * The feature id for the '<em><b>Zone Analysis</b></em>' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__ZONE_ANALYSIS = 13;
+
+	/**
 	 * The number of structural features of the '<em>Project</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = 13;
+	int PROJECT_FEATURE_COUNT = 14;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -2097,6 +2106,169 @@ public interface SitePackage extends EPackage {
 	int RANK_CORRELATION_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link eluvia.site.model.impl.ZoneAnalysisSettingsImpl <em>Zone Analysis Settings</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.impl.ZoneAnalysisSettingsImpl
+	 * @see eluvia.site.model.impl.SitePackageImpl#getZoneAnalysisSettings()
+	 * @generated
+	 */
+	int ZONE_ANALYSIS_SETTINGS = 20;
+
+	/**
+	 * The feature id for the '<em><b>Estimator</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__ESTIMATOR = 0;
+
+	/**
+	 * The feature id for the '<em><b>Non Detect Rule</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__NON_DETECT_RULE = 1;
+
+	/**
+	 * The feature id for the '<em><b>Inverse Distance Power</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__INVERSE_DISTANCE_POWER = 2;
+
+	/**
+	 * The feature id for the '<em><b>Maximum Neighbours</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__MAXIMUM_NEIGHBOURS = 3;
+
+	/**
+	 * The feature id for the '<em><b>Search Radius Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__SEARCH_RADIUS_METRES = 4;
+
+	/**
+	 * The feature id for the '<em><b>Vertical Distance Factor</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__VERTICAL_DISTANCE_FACTOR = 5;
+
+	/**
+	 * The feature id for the '<em><b>Block Plan Size Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__BLOCK_PLAN_SIZE_METRES = 6;
+
+	/**
+	 * The feature id for the '<em><b>Block Depth Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__BLOCK_DEPTH_METRES = 7;
+
+	/**
+	 * The feature id for the '<em><b>Variogram Model</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__VARIOGRAM_MODEL = 8;
+
+	/**
+	 * The feature id for the '<em><b>Variogram Nugget Mg Per Kg Squared</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__VARIOGRAM_NUGGET_MG_PER_KG_SQUARED = 9;
+
+	/**
+	 * The feature id for the '<em><b>Variogram Sill Mg Per Kg Squared</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__VARIOGRAM_SILL_MG_PER_KG_SQUARED = 10;
+
+	/**
+	 * The feature id for the '<em><b>Variogram Range Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__VARIOGRAM_RANGE_METRES = 11;
+
+	/**
+	 * The feature id for the '<em><b>Delay Years</b></em>' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__DELAY_YEARS = 12;
+
+	/**
+	 * The feature id for the '<em><b>Transverse Dispersivity Fraction</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__TRANSVERSE_DISPERSIVITY_FRACTION = 13;
+
+	/**
+	 * The feature id for the '<em><b>Hot Spot Multiple</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS__HOT_SPOT_MULTIPLE = 14;
+
+	/**
+	 * The number of structural features of the '<em>Zone Analysis Settings</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS_FEATURE_COUNT = 15;
+
+	/**
+	 * The number of operations of the '<em>Zone Analysis Settings</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ZONE_ANALYSIS_SETTINGS_OPERATION_COUNT = 0;
+
+	/**
 	 * The meta object id for the '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2104,7 +2276,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceCriterion()
 	 * @generated
 	 */
-	int COMPLIANCE_CRITERION = 20;
+	int COMPLIANCE_CRITERION = 21;
 
 
 	/**
@@ -2115,7 +2287,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getUnitSystem()
 	 * @generated
 	 */
-	int UNIT_SYSTEM = 21;
+	int UNIT_SYSTEM = 22;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.DispersivityRule <em>Dispersivity Rule</em>}' enum.
@@ -2125,7 +2297,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getDispersivityRule()
 	 * @generated
 	 */
-	int DISPERSIVITY_RULE = 22;
+	int DISPERSIVITY_RULE = 23;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.SorptionIsotherm <em>Sorption Isotherm</em>}' enum.
@@ -2135,7 +2307,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getSorptionIsotherm()
 	 * @generated
 	 */
-	int SORPTION_ISOTHERM = 23;
+	int SORPTION_ISOTHERM = 24;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.NonequilibriumEntry <em>Nonequilibrium Entry</em>}' enum.
@@ -2145,7 +2317,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getNonequilibriumEntry()
 	 * @generated
 	 */
-	int NONEQUILIBRIUM_ENTRY = 24;
+	int NONEQUILIBRIUM_ENTRY = 25;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.ComplianceStatistic <em>Compliance Statistic</em>}' enum.
@@ -2155,7 +2327,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getComplianceStatistic()
 	 * @generated
 	 */
-	int COMPLIANCE_STATISTIC = 25;
+	int COMPLIANCE_STATISTIC = 26;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.SolutionMethod <em>Solution Method</em>}' enum.
@@ -2165,7 +2337,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getSolutionMethod()
 	 * @generated
 	 */
-	int SOLUTION_METHOD = 26;
+	int SOLUTION_METHOD = 27;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.ExcavationSoilType <em>Excavation Soil Type</em>}' enum.
@@ -2175,7 +2347,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getExcavationSoilType()
 	 * @generated
 	 */
-	int EXCAVATION_SOIL_TYPE = 27;
+	int EXCAVATION_SOIL_TYPE = 28;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.ColumnTestKind <em>Column Test Kind</em>}' enum.
@@ -2185,7 +2357,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getColumnTestKind()
 	 * @generated
 	 */
-	int COLUMN_TEST_KIND = 28;
+	int COLUMN_TEST_KIND = 29;
 
 
 	/**
@@ -2196,7 +2368,7 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getUncertaintySampling()
 	 * @generated
 	 */
-	int UNCERTAINTY_SAMPLING = 29;
+	int UNCERTAINTY_SAMPLING = 30;
 
 	/**
 	 * The meta object id for the '{@link eluvia.site.model.InputDistributionKind <em>Input Distribution Kind</em>}' enum.
@@ -2206,7 +2378,38 @@ public interface SitePackage extends EPackage {
 	 * @see eluvia.site.model.impl.SitePackageImpl#getInputDistributionKind()
 	 * @generated
 	 */
-	int INPUT_DISTRIBUTION_KIND = 30;
+	int INPUT_DISTRIBUTION_KIND = 31;
+
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.ZoneEstimatorKind <em>Zone Estimator Kind</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.ZoneEstimatorKind
+	 * @see eluvia.site.model.impl.SitePackageImpl#getZoneEstimatorKind()
+	 * @generated
+	 */
+	int ZONE_ESTIMATOR_KIND = 32;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.NonDetectValue <em>Non Detect Value</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.NonDetectValue
+	 * @see eluvia.site.model.impl.SitePackageImpl#getNonDetectValue()
+	 * @generated
+	 */
+	int NON_DETECT_VALUE = 33;
+
+	/**
+	 * The meta object id for the '{@link eluvia.site.model.VariogramShapeKind <em>Variogram Shape Kind</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see eluvia.site.model.VariogramShapeKind
+	 * @see eluvia.site.model.impl.SitePackageImpl#getVariogramShapeKind()
+	 * @generated
+	 */
+	int VARIOGRAM_SHAPE_KIND = 34;
 
 
 	/**
@@ -2361,6 +2564,17 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getProject_Uncertainty();
+
+	/**
+	 * Returns the meta object for the containment reference '{@link eluvia.site.model.Project#getZoneAnalysis <em>Zone Analysis</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference '<em>Zone Analysis</em>'.
+	 * @see eluvia.site.model.Project#getZoneAnalysis()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_ZoneAnalysis();
 
 	/**
 	 * Returns the meta object for class '{@link eluvia.site.model.Site <em>Site</em>}'.
@@ -4214,6 +4428,181 @@ public interface SitePackage extends EPackage {
 	EAttribute getRankCorrelation_Coefficient();
 
 	/**
+	 * Returns the meta object for class '{@link eluvia.site.model.ZoneAnalysisSettings <em>Zone Analysis Settings</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Zone Analysis Settings</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings
+	 * @generated
+	 */
+	EClass getZoneAnalysisSettings();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getEstimator <em>Estimator</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Estimator</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getEstimator()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_Estimator();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getNonDetectRule <em>Non Detect Rule</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Non Detect Rule</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getNonDetectRule()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_NonDetectRule();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getInverseDistancePower <em>Inverse Distance Power</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Inverse Distance Power</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getInverseDistancePower()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_InverseDistancePower();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getMaximumNeighbours <em>Maximum Neighbours</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Maximum Neighbours</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getMaximumNeighbours()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_MaximumNeighbours();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getSearchRadiusMetres <em>Search Radius Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Search Radius Metres</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getSearchRadiusMetres()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_SearchRadiusMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getVerticalDistanceFactor <em>Vertical Distance Factor</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Vertical Distance Factor</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getVerticalDistanceFactor()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_VerticalDistanceFactor();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getBlockPlanSizeMetres <em>Block Plan Size Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Block Plan Size Metres</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getBlockPlanSizeMetres()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_BlockPlanSizeMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getBlockDepthMetres <em>Block Depth Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Block Depth Metres</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getBlockDepthMetres()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_BlockDepthMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getVariogramModel <em>Variogram Model</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Variogram Model</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getVariogramModel()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_VariogramModel();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getVariogramNuggetMgPerKgSquared <em>Variogram Nugget Mg Per Kg Squared</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Variogram Nugget Mg Per Kg Squared</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getVariogramNuggetMgPerKgSquared()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_VariogramNuggetMgPerKgSquared();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getVariogramSillMgPerKgSquared <em>Variogram Sill Mg Per Kg Squared</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Variogram Sill Mg Per Kg Squared</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getVariogramSillMgPerKgSquared()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_VariogramSillMgPerKgSquared();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getVariogramRangeMetres <em>Variogram Range Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Variogram Range Metres</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getVariogramRangeMetres()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_VariogramRangeMetres();
+
+	/**
+	 * Returns the meta object for the attribute list '{@link eluvia.site.model.ZoneAnalysisSettings#getDelayYears <em>Delay Years</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute list '<em>Delay Years</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getDelayYears()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_DelayYears();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getTransverseDispersivityFraction <em>Transverse Dispersivity Fraction</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Transverse Dispersivity Fraction</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getTransverseDispersivityFraction()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_TransverseDispersivityFraction();
+
+	/**
+	 * Returns the meta object for the attribute '{@link eluvia.site.model.ZoneAnalysisSettings#getHotSpotMultiple <em>Hot Spot Multiple</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Hot Spot Multiple</em>'.
+	 * @see eluvia.site.model.ZoneAnalysisSettings#getHotSpotMultiple()
+	 * @see #getZoneAnalysisSettings()
+	 * @generated
+	 */
+	EAttribute getZoneAnalysisSettings_HotSpotMultiple();
+
+	/**
 	 * Returns the meta object for enum '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -4322,6 +4711,36 @@ public interface SitePackage extends EPackage {
 	 * @generated
 	 */
 	EEnum getInputDistributionKind();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.ZoneEstimatorKind <em>Zone Estimator Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Zone Estimator Kind</em>'.
+	 * @see eluvia.site.model.ZoneEstimatorKind
+	 * @generated
+	 */
+	EEnum getZoneEstimatorKind();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.NonDetectValue <em>Non Detect Value</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Non Detect Value</em>'.
+	 * @see eluvia.site.model.NonDetectValue
+	 * @generated
+	 */
+	EEnum getNonDetectValue();
+
+	/**
+	 * Returns the meta object for enum '{@link eluvia.site.model.VariogramShapeKind <em>Variogram Shape Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Variogram Shape Kind</em>'.
+	 * @see eluvia.site.model.VariogramShapeKind
+	 * @generated
+	 */
+	EEnum getVariogramShapeKind();
 
 	/**
 	 * Returns the factory that creates the instances of the model.
@@ -4459,6 +4878,14 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EReference PROJECT__UNCERTAINTY = eINSTANCE.getProject_Uncertainty();
+
+		/**
+		 * The meta object literal for the '<em><b>Zone Analysis</b></em>' containment reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__ZONE_ANALYSIS = eINSTANCE.getProject_ZoneAnalysis();
 
 		/**
 		 * The meta object literal for the '{@link eluvia.site.model.impl.SiteImpl <em>Site</em>}' class.
@@ -5859,6 +6286,136 @@ public interface SitePackage extends EPackage {
 		EAttribute RANK_CORRELATION__COEFFICIENT = eINSTANCE.getRankCorrelation_Coefficient();
 
 		/**
+		 * The meta object literal for the '{@link eluvia.site.model.impl.ZoneAnalysisSettingsImpl <em>Zone Analysis Settings</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.impl.ZoneAnalysisSettingsImpl
+		 * @see eluvia.site.model.impl.SitePackageImpl#getZoneAnalysisSettings()
+		 * @generated
+		 */
+		EClass ZONE_ANALYSIS_SETTINGS = eINSTANCE.getZoneAnalysisSettings();
+
+		/**
+		 * The meta object literal for the '<em><b>Estimator</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__ESTIMATOR = eINSTANCE.getZoneAnalysisSettings_Estimator();
+
+		/**
+		 * The meta object literal for the '<em><b>Non Detect Rule</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__NON_DETECT_RULE = eINSTANCE.getZoneAnalysisSettings_NonDetectRule();
+
+		/**
+		 * The meta object literal for the '<em><b>Inverse Distance Power</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__INVERSE_DISTANCE_POWER = eINSTANCE.getZoneAnalysisSettings_InverseDistancePower();
+
+		/**
+		 * The meta object literal for the '<em><b>Maximum Neighbours</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__MAXIMUM_NEIGHBOURS = eINSTANCE.getZoneAnalysisSettings_MaximumNeighbours();
+
+		/**
+		 * The meta object literal for the '<em><b>Search Radius Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__SEARCH_RADIUS_METRES = eINSTANCE.getZoneAnalysisSettings_SearchRadiusMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Vertical Distance Factor</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__VERTICAL_DISTANCE_FACTOR = eINSTANCE.getZoneAnalysisSettings_VerticalDistanceFactor();
+
+		/**
+		 * The meta object literal for the '<em><b>Block Plan Size Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__BLOCK_PLAN_SIZE_METRES = eINSTANCE.getZoneAnalysisSettings_BlockPlanSizeMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Block Depth Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__BLOCK_DEPTH_METRES = eINSTANCE.getZoneAnalysisSettings_BlockDepthMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Variogram Model</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__VARIOGRAM_MODEL = eINSTANCE.getZoneAnalysisSettings_VariogramModel();
+
+		/**
+		 * The meta object literal for the '<em><b>Variogram Nugget Mg Per Kg Squared</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__VARIOGRAM_NUGGET_MG_PER_KG_SQUARED = eINSTANCE.getZoneAnalysisSettings_VariogramNuggetMgPerKgSquared();
+
+		/**
+		 * The meta object literal for the '<em><b>Variogram Sill Mg Per Kg Squared</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__VARIOGRAM_SILL_MG_PER_KG_SQUARED = eINSTANCE.getZoneAnalysisSettings_VariogramSillMgPerKgSquared();
+
+		/**
+		 * The meta object literal for the '<em><b>Variogram Range Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__VARIOGRAM_RANGE_METRES = eINSTANCE.getZoneAnalysisSettings_VariogramRangeMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Delay Years</b></em>' attribute list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__DELAY_YEARS = eINSTANCE.getZoneAnalysisSettings_DelayYears();
+
+		/**
+		 * The meta object literal for the '<em><b>Transverse Dispersivity Fraction</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__TRANSVERSE_DISPERSIVITY_FRACTION = eINSTANCE.getZoneAnalysisSettings_TransverseDispersivityFraction();
+
+		/**
+		 * The meta object literal for the '<em><b>Hot Spot Multiple</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ZONE_ANALYSIS_SETTINGS__HOT_SPOT_MULTIPLE = eINSTANCE.getZoneAnalysisSettings_HotSpotMultiple();
+
+		/**
 		 * The meta object literal for the '{@link eluvia.site.model.ComplianceCriterion <em>Compliance Criterion</em>}' enum.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -5967,6 +6524,36 @@ public interface SitePackage extends EPackage {
 		 * @generated
 		 */
 		EEnum INPUT_DISTRIBUTION_KIND = eINSTANCE.getInputDistributionKind();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.ZoneEstimatorKind <em>Zone Estimator Kind</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.ZoneEstimatorKind
+		 * @see eluvia.site.model.impl.SitePackageImpl#getZoneEstimatorKind()
+		 * @generated
+		 */
+		EEnum ZONE_ESTIMATOR_KIND = eINSTANCE.getZoneEstimatorKind();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.NonDetectValue <em>Non Detect Value</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.NonDetectValue
+		 * @see eluvia.site.model.impl.SitePackageImpl#getNonDetectValue()
+		 * @generated
+		 */
+		EEnum NON_DETECT_VALUE = eINSTANCE.getNonDetectValue();
+
+		/**
+		 * The meta object literal for the '{@link eluvia.site.model.VariogramShapeKind <em>Variogram Shape Kind</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see eluvia.site.model.VariogramShapeKind
+		 * @see eluvia.site.model.impl.SitePackageImpl#getVariogramShapeKind()
+		 * @generated
+		 */
+		EEnum VARIOGRAM_SHAPE_KIND = eINSTANCE.getVariogramShapeKind();
 
 	}
 

@@ -42,6 +42,9 @@ import eluvia.site.model.InputDistributionKind;
 import eluvia.site.model.RankCorrelation;
 import eluvia.site.model.UncertainInput;
 import eluvia.site.model.UncertaintySettings;
+import eluvia.site.model.VariogramShapeKind;
+import eluvia.site.model.ZoneAnalysisSettings;
+import eluvia.site.model.ZoneEstimatorKind;
 
 /**
  * Checks every field of a project: ranges, required values and consistency between fields
@@ -134,6 +137,9 @@ public final class SiteValidator {
         }
         if (project.getUncertainty() != null) {
             uncertainty(project, project.getUncertainty());
+        }
+        if (project.getZoneAnalysis() != null) {
+            zoneAnalysis(project.getZoneAnalysis());
         }
     }
 
@@ -860,6 +866,114 @@ public final class SiteValidator {
         }
         if (revision.getSummary() == null || revision.getSummary().isBlank()) {
             warning(revision, label, "summary", "(empty)", "not empty", "say what changed");
+        }
+    }
+
+    // ---- zone analysis -------------------------------------------------------------------------
+
+    /** The largest inverse-distance power (as eluvia.zone InverseDistanceWeighting.MAX_POWER). */
+    static final double MAX_INVERSE_DISTANCE_POWER = 20.0;
+    /** The most neighbours per block (as eluvia.zone OrdinaryKriging.MAX_NEIGHBOURS). */
+    static final int MAX_ZONE_NEIGHBOURS = 200;
+    /** The largest vertical distance factor (as eluvia.zone SampleSet.MAX_VERTICAL_DISTANCE_FACTOR). */
+    static final double MAX_VERTICAL_DISTANCE_FACTOR = 1000.0;
+    /** The largest block plan size, m (as eluvia.design DesignSettings). */
+    static final double MAX_BLOCK_PLAN_SIZE_METRES = 1000.0;
+    /** The largest block depth, m (as eluvia.design DesignSettings). */
+    static final double MAX_BLOCK_DEPTH_METRES = 100.0;
+    /** The longest delay before the remedy starts, years (as eluvia.design DesignSettings). */
+    static final double MAX_DELAY_YEARS = 100.0;
+    /** The largest hot-spot multiple of the cleanup level (as eluvia.design DesignSettings). */
+    static final double MAX_HOT_SPOT_MULTIPLE = 1e6;
+
+    private void zoneAnalysis(ZoneAnalysisSettings z) {
+        String label = "Zone analysis settings";
+        double power = z.getInverseDistancePower();
+        if (!(finite(power) && power > 0 && power <= MAX_INVERSE_DISTANCE_POWER)) {
+            error(z, label, "inverseDistancePower", num(power), "(0, " + num(MAX_INVERSE_DISTANCE_POWER) + "] (dimensionless)",
+                    "enter the power of the inverse-distance weights; 2 is common practice");
+        }
+        int neighbours = z.getMaximumNeighbours();
+        if (neighbours < 1 || neighbours > MAX_ZONE_NEIGHBOURS) {
+            error(z, label, "maximumNeighbours", Integer.toString(neighbours), "1 to " + MAX_ZONE_NEIGHBOURS,
+                    "enter the most samples used per block; 16 is common practice");
+        }
+        double radius = z.getSearchRadiusMetres();
+        if (!(finite(radius) && radius >= 0)) {
+            error(z, label, "searchRadiusMetres", num(radius), "0 (automatic) or greater, finite, m",
+                    "enter the search radius in metres (vertically scaled), or 0 for the automatic choice");
+        }
+        double factor = z.getVerticalDistanceFactor();
+        if (!(finite(factor) && factor > 0 && factor <= MAX_VERTICAL_DISTANCE_FACTOR)) {
+            error(z, label, "verticalDistanceFactor", num(factor), "(0, " + num(MAX_VERTICAL_DISTANCE_FACTOR) + "] (dimensionless)",
+                    "enter the horizontal over the vertical range of correlation; 1 is isotropic, 10 the stated default");
+        }
+        double plan = z.getBlockPlanSizeMetres();
+        if (!(finite(plan) && plan >= 0 && plan <= MAX_BLOCK_PLAN_SIZE_METRES)) {
+            error(z, label, "blockPlanSizeMetres", num(plan), "0 (automatic) to " + num(MAX_BLOCK_PLAN_SIZE_METRES) + " m",
+                    "enter the plan size of a block in metres, or 0 for the automatic choice");
+        }
+        double depth = z.getBlockDepthMetres();
+        if (!(finite(depth) && depth >= 0 && depth <= MAX_BLOCK_DEPTH_METRES)) {
+            error(z, label, "blockDepthMetres", num(depth), "0 (automatic) to " + num(MAX_BLOCK_DEPTH_METRES) + " m",
+                    "enter the depth of a block in metres, or 0 for the automatic choice");
+        }
+        double nugget = z.getVariogramNuggetMgPerKgSquared();
+        double sill = z.getVariogramSillMgPerKgSquared();
+        double range = z.getVariogramRangeMetres();
+        boolean rangeOk = finite(range) && range >= 0;
+        if (!rangeOk) {
+            error(z, label, "variogramRangeMetres", num(range), "0 (automatic first guess) or greater, finite, m (scaled)",
+                    "enter the range read from the experimental variogram, or 0 for the automatic first guess");
+        }
+        boolean sillOk = finite(sill) && sill >= 0;
+        if (!sillOk) {
+            error(z, label, "variogramSillMgPerKgSquared", num(sill), "0 or greater, finite, (mg/kg)^2",
+                    "enter the total sill (nugget included) read from the experimental variogram");
+        } else if (rangeOk && range > 0 && !(sill > 0)) {
+            error(z, label, "variogramSillMgPerKgSquared", num(sill), "greater than 0 (mg/kg)^2 when the range is given",
+                    "enter the total sill read from the experimental variogram, or set the range to 0 for the automatic first guess");
+        }
+        if (!(finite(nugget) && nugget >= 0)) {
+            error(z, label, "variogramNuggetMgPerKgSquared", num(nugget), "0 or greater, finite, (mg/kg)^2",
+                    "enter the nugget read from the experimental variogram, 0 for none");
+        } else if (rangeOk && range > 0 && sillOk && sill > 0 && !(nugget < sill)) {
+            error(z, label, "variogramNuggetMgPerKgSquared", num(nugget), "0 to less than the sill " + num(sill) + " (mg/kg)^2",
+                    "the sill includes the nugget: enter a nugget below the sill, or raise the sill");
+        } else if (rangeOk && range == 0 && (nugget > 0 || sillOk && sill > 0)) {
+            warning(z, label, "variogramNuggetMgPerKgSquared", num(nugget), "0 when the range is 0 (automatic first guess)",
+                    "the automatic first guess ignores the nugget and the sill: enter the range too, or clear the nugget and the sill");
+        }
+        if (rangeOk && range == 0 && z.getVariogramModel() != VariogramShapeKind.SPHERICAL) {
+            warning(z, label, "variogramModel", z.getVariogramModel().getName(), "SPHERICAL when the range is 0 (automatic first guess)",
+                    "the automatic first guess is spherical: enter the nugget, sill and range of the chosen shape");
+        }
+        if (z.getEstimator() == ZoneEstimatorKind.INVERSE_DISTANCE && rangeOk && range > 0) {
+            warning(z, label, "estimator", z.getEstimator().getName(), "ORDINARY_KRIGING when a variogram is entered",
+                    "the variogram is used by ordinary kriging only: choose ORDINARY_KRIGING, or set the range to 0");
+        }
+        List<Double> delays = z.getDelayYears();
+        for (int i = 0; i < delays.size(); i++) {
+            double d = delays.get(i);
+            if (!(finite(d) && d >= 0 && d <= MAX_DELAY_YEARS) || i > 0 && !(d > delays.get(i - 1))) {
+                List<String> text = new ArrayList<>();
+                for (double each : delays) {
+                    text.add(num(each));
+                }
+                error(z, label, "delayYears", String.join(" ", text), "increasing delays, each 0 to " + num(MAX_DELAY_YEARS) + " years",
+                        "list the delays in years in increasing order, e.g. 0 1 2 5 10; none for that default");
+                break;
+            }
+        }
+        double transverse = z.getTransverseDispersivityFraction();
+        if (!(finite(transverse) && transverse > 0 && transverse <= 1)) {
+            error(z, label, "transverseDispersivityFraction", num(transverse), "(0, 1] (dimensionless)",
+                    "enter transverse over longitudinal dispersivity; 0.1 by common practice");
+        }
+        double hotSpot = z.getHotSpotMultiple();
+        if (!(finite(hotSpot) && hotSpot > 1 && hotSpot <= MAX_HOT_SPOT_MULTIPLE)) {
+            error(z, label, "hotSpotMultiple", num(hotSpot), "(1, " + num(MAX_HOT_SPOT_MULTIPLE) + "] (dimensionless)",
+                    "enter the multiple of the cleanup level above which the hybrid digs the soil out, e.g. 10");
         }
     }
 

@@ -45,6 +45,9 @@ import eluvia.site.model.TreatmentZone;
 import eluvia.site.model.RankCorrelation;
 import eluvia.site.model.UncertainInput;
 import eluvia.site.model.UncertaintySettings;
+import eluvia.site.model.VariogramShapeKind;
+import eluvia.site.model.ZoneAnalysisSettings;
+import eluvia.site.model.ZoneEstimatorKind;
 import eluvia.site.tests.TestProjects;
 
 /**
@@ -113,6 +116,18 @@ final class SiteValidatorTest {
 
     private static RankCorrelation correlation(Project p, int i) {
         return uncertainty(p).getRankCorrelations().get(i);
+    }
+
+    private static ZoneAnalysisSettings zoning(Project p) {
+        return p.getZoneAnalysis();
+    }
+
+    /** Kriging with an entered spherical variogram: nugget 1, sill 10 (mg/kg)^2, range 20 m. */
+    private static void kriging(Project p) {
+        zoning(p).setEstimator(ZoneEstimatorKind.ORDINARY_KRIGING);
+        zoning(p).setVariogramNuggetMgPerKgSquared(1);
+        zoning(p).setVariogramSillMgPerKgSquared(10);
+        zoning(p).setVariogramRangeMetres(20);
     }
 
     private static Arguments error(String what, Consumer<Project> change, Function<Project, EObject> object,
@@ -438,7 +453,49 @@ final class SiteValidatorTest {
                     twice.setCoefficient(0.2);
                     uncertainty(p).getRankCorrelations().add(twice);
                 }, p -> correlation(p, 1), "second", "input 1", "a pair no other rank correlation names"),
-                error("rank correlation of one", p -> correlation(p, 0).setCoefficient(1), p -> correlation(p, 0), "coefficient", "1", "(-1, 1)"));
+                error("rank correlation of one", p -> correlation(p, 0).setCoefficient(1), p -> correlation(p, 0), "coefficient", "1", "(-1, 1)"),
+                // Zone analysis settings (ranges: what eluvia.zone's estimators and eluvia.design's settings accept)
+                error("inverse-distance power zero", p -> zoning(p).setInverseDistancePower(0), p -> zoning(p), "inverseDistancePower", "0",
+                        "(0, 20]"),
+                error("inverse-distance power above the estimator's limit", p -> zoning(p).setInverseDistancePower(25), p -> zoning(p),
+                        "inverseDistancePower", "25", "(0, 20]"),
+                error("no neighbours", p -> zoning(p).setMaximumNeighbours(0), p -> zoning(p), "maximumNeighbours", "0", "1 to 200"),
+                error("more neighbours than kriging takes", p -> zoning(p).setMaximumNeighbours(201), p -> zoning(p), "maximumNeighbours",
+                        "201", "1 to 200"),
+                error("search radius negative", p -> zoning(p).setSearchRadiusMetres(-5), p -> zoning(p), "searchRadiusMetres", "-5",
+                        "0 (automatic) or greater"),
+                error("vertical distance factor zero", p -> zoning(p).setVerticalDistanceFactor(0), p -> zoning(p), "verticalDistanceFactor",
+                        "0", "(0, 1000]"),
+                error("block plan size above 1000 m", p -> zoning(p).setBlockPlanSizeMetres(1500), p -> zoning(p), "blockPlanSizeMetres",
+                        "1500", "0 (automatic) to 1000 m"),
+                error("block depth negative", p -> zoning(p).setBlockDepthMetres(-0.5), p -> zoning(p), "blockDepthMetres", "-0.5",
+                        "0 (automatic) to 100 m"),
+                error("variogram range negative", p -> { kriging(p); zoning(p).setVariogramRangeMetres(-1); }, p -> zoning(p),
+                        "variogramRangeMetres", "-1", "0 (automatic first guess) or greater"),
+                error("kriging range given without a sill", p -> { kriging(p); zoning(p).setVariogramNuggetMgPerKgSquared(0);
+                    zoning(p).setVariogramSillMgPerKgSquared(0); }, p -> zoning(p), "variogramSillMgPerKgSquared", "0",
+                        "greater than 0 (mg/kg)^2 when the range is given"),
+                error("variogram sill negative", p -> { kriging(p); zoning(p).setVariogramSillMgPerKgSquared(-2); }, p -> zoning(p),
+                        "variogramSillMgPerKgSquared", "-2", "0 or greater"),
+                error("nugget equal to the sill", p -> { kriging(p); zoning(p).setVariogramNuggetMgPerKgSquared(10); }, p -> zoning(p),
+                        "variogramNuggetMgPerKgSquared", "10", "less than the sill 10"),
+                error("nugget negative", p -> { kriging(p); zoning(p).setVariogramNuggetMgPerKgSquared(-1); }, p -> zoning(p),
+                        "variogramNuggetMgPerKgSquared", "-1", "0 or greater"),
+                warning("nugget and sill without a range", p -> { kriging(p); zoning(p).setVariogramRangeMetres(0); }, p -> zoning(p),
+                        "variogramNuggetMgPerKgSquared", "1", "0 when the range is 0"),
+                warning("exponential shape without a range", p -> zoning(p).setVariogramModel(VariogramShapeKind.EXPONENTIAL),
+                        p -> zoning(p), "variogramModel", "EXPONENTIAL", "SPHERICAL when the range is 0"),
+                warning("variogram entered for inverse-distance weighting", p -> { kriging(p);
+                    zoning(p).setEstimator(ZoneEstimatorKind.INVERSE_DISTANCE); }, p -> zoning(p), "estimator", "INVERSE_DISTANCE",
+                        "ORDINARY_KRIGING when a variogram is entered"),
+                error("delays out of order", p -> zoning(p).getDelayYears().set(2, 0.5), p -> zoning(p), "delayYears", "0 1 0.5 5 10",
+                        "increasing delays, each 0 to 100 years"),
+                error("delay beyond 100 years", p -> zoning(p).getDelayYears().add(150.0), p -> zoning(p), "delayYears", "0 1 2 5 10 150",
+                        "increasing delays, each 0 to 100 years"),
+                error("transverse dispersivity fraction above one", p -> zoning(p).setTransverseDispersivityFraction(1.5), p -> zoning(p),
+                        "transverseDispersivityFraction", "1.5", "(0, 1]"),
+                error("hot-spot multiple of one", p -> zoning(p).setHotSpotMultiple(1), p -> zoning(p), "hotSpotMultiple", "1",
+                        "(1, 1000000]"));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -470,7 +527,8 @@ final class SiteValidatorTest {
             "Contaminant.kdEntered", "CleanupLevel.statistic", "CleanupLevel.porewaterLevelEntered", "SoilLayer.dispersivityRule",
             "FlushingDesign.criterion", "ExcavationDesign.soilType", "Sample.nonDetect", "ColumnTest.kind",
             "Contaminant.isotherm", "Contaminant.nonequilibrium",
-            "UncertaintySettings.seed", "UncertaintySettings.samplingMethod", "UncertainInput.distribution");
+            "UncertaintySettings.seed", "UncertaintySettings.samplingMethod", "UncertainInput.distribution",
+            "ZoneAnalysisSettings.nonDetectRule");
 
     @Test
     void everyFieldHasARuleTestedHereOrTakesAnyValue() {
@@ -496,6 +554,30 @@ final class SiteValidatorTest {
             }
         }
         assertEquals(List.of(), missing, "fields without a tested rule");
+    }
+
+    @Test
+    void zoneAnalysisSettingsAcceptTheirDefaultsAndAnEnteredVariogram() {
+        Project project = TestProjects.example();
+        ZoneAnalysisSettings z = zoning(project);
+        assertEquals(List.of(), SiteValidator.validate(project).stream().filter(p -> p.object() == z).collect(Collectors.toList()));
+        kriging(project);
+        z.setInverseDistancePower(20); // the ends of the estimators' ranges (eluvia.zone limits)
+        z.setMaximumNeighbours(200);
+        z.setVerticalDistanceFactor(1000);
+        z.setBlockPlanSizeMetres(1000);
+        z.setBlockDepthMetres(100);
+        z.setTransverseDispersivityFraction(1);
+        z.getDelayYears().clear(); // no delays: the stated default list
+        assertEquals(List.of(), SiteValidator.validate(project).stream().filter(p -> p.object() == z).collect(Collectors.toList()));
+        ZoneAnalysisSettings fresh = SiteFactory.eINSTANCE.createZoneAnalysisSettings();
+        // the model's defaults are the pipeline's stated defaults (eluvia.design DesignSettings)
+        assertEquals(2.0, fresh.getInverseDistancePower());
+        assertEquals(16, fresh.getMaximumNeighbours());
+        assertEquals(10.0, fresh.getVerticalDistanceFactor());
+        assertEquals(0.1, fresh.getTransverseDispersivityFraction());
+        assertEquals(10.0, fresh.getHotSpotMultiple());
+        assertEquals(ZoneEstimatorKind.INVERSE_DISTANCE, fresh.getEstimator());
     }
 
     @Test

@@ -180,6 +180,7 @@ public class ProjectItemProvider
 			childrenFeatures.add(SitePackage.Literals.PROJECT__PRICE_BOOKS);
 			childrenFeatures.add(SitePackage.Literals.PROJECT__COLUMN_TESTS);
 			childrenFeatures.add(SitePackage.Literals.PROJECT__UNCERTAINTY);
+			childrenFeatures.add(SitePackage.Literals.PROJECT__ZONE_ANALYSIS);
 		}
 		return childrenFeatures;
 	}
@@ -250,6 +251,7 @@ public class ProjectItemProvider
 			case SitePackage.PROJECT__PRICE_BOOKS:
 			case SitePackage.PROJECT__COLUMN_TESTS:
 			case SitePackage.PROJECT__UNCERTAINTY:
+			case SitePackage.PROJECT__ZONE_ANALYSIS:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
 		}
@@ -311,6 +313,11 @@ public class ProjectItemProvider
 			(createChildParameter
 				(SitePackage.Literals.PROJECT__UNCERTAINTY,
 				 SiteFactory.eINSTANCE.createUncertaintySettings()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(SitePackage.Literals.PROJECT__ZONE_ANALYSIS,
+				 SiteFactory.eINSTANCE.createZoneAnalysisSettings()));
 	}
 
 	/**

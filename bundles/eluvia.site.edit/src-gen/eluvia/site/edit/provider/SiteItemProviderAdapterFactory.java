@@ -532,6 +532,29 @@ public class SiteItemProviderAdapterFactory extends SiteAdapterFactory implement
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link eluvia.site.model.ZoneAnalysisSettings} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ZoneAnalysisSettingsItemProvider zoneAnalysisSettingsItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link eluvia.site.model.ZoneAnalysisSettings}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createZoneAnalysisSettingsAdapter() {
+		if (zoneAnalysisSettingsItemProvider == null) {
+			zoneAnalysisSettingsItemProvider = new ZoneAnalysisSettingsItemProvider(this);
+		}
+
+		return zoneAnalysisSettingsItemProvider;
+	}
+
+	/**
 	 * This returns the root adapter factory that contains this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -656,6 +679,7 @@ public class SiteItemProviderAdapterFactory extends SiteAdapterFactory implement
 		if (uncertaintySettingsItemProvider != null) uncertaintySettingsItemProvider.dispose();
 		if (uncertainInputItemProvider != null) uncertainInputItemProvider.dispose();
 		if (rankCorrelationItemProvider != null) rankCorrelationItemProvider.dispose();
+		if (zoneAnalysisSettingsItemProvider != null) zoneAnalysisSettingsItemProvider.dispose();
 	}
 
 }

@@ -15,6 +15,7 @@ import eluvia.site.model.SitePackage;
 
 import eluvia.site.model.UncertaintySettings;
 import eluvia.site.model.UnitSystem;
+import eluvia.site.model.ZoneAnalysisSettings;
 import java.util.Collection;
 
 import org.eclipse.emf.common.notify.Notification;
@@ -52,6 +53,7 @@ import org.eclipse.emf.ecore.util.InternalEList;
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getPriceBooks <em>Price Books</em>}</li>
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getColumnTests <em>Column Tests</em>}</li>
  *   <li>{@link eluvia.site.model.impl.ProjectImpl#getUncertainty <em>Uncertainty</em>}</li>
+ *   <li>{@link eluvia.site.model.impl.ProjectImpl#getZoneAnalysis <em>Zone Analysis</em>}</li>
  * </ul>
  *
  * @generated
@@ -226,6 +228,16 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 	 * @ordered
 	 */
 	protected UncertaintySettings uncertainty;
+
+	/**
+	 * The cached value of the '{@link #getZoneAnalysis() <em>Zone Analysis</em>}' containment reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getZoneAnalysis()
+	 * @generated
+	 * @ordered
+	 */
+	protected ZoneAnalysisSettings zoneAnalysis;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -525,6 +537,51 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 	 * @generated
 	 */
 	@Override
+	public ZoneAnalysisSettings getZoneAnalysis() {
+		return zoneAnalysis;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public NotificationChain basicSetZoneAnalysis(ZoneAnalysisSettings newZoneAnalysis, NotificationChain msgs) {
+		ZoneAnalysisSettings oldZoneAnalysis = zoneAnalysis;
+		zoneAnalysis = newZoneAnalysis;
+		if (eNotificationRequired()) {
+			ENotificationImpl notification = new ENotificationImpl(this, Notification.SET, SitePackage.PROJECT__ZONE_ANALYSIS, oldZoneAnalysis, newZoneAnalysis);
+			if (msgs == null) msgs = notification; else msgs.add(notification);
+		}
+		return msgs;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setZoneAnalysis(ZoneAnalysisSettings newZoneAnalysis) {
+		if (newZoneAnalysis != zoneAnalysis) {
+			NotificationChain msgs = null;
+			if (zoneAnalysis != null)
+				msgs = ((InternalEObject)zoneAnalysis).eInverseRemove(this, EOPPOSITE_FEATURE_BASE - SitePackage.PROJECT__ZONE_ANALYSIS, null, msgs);
+			if (newZoneAnalysis != null)
+				msgs = ((InternalEObject)newZoneAnalysis).eInverseAdd(this, EOPPOSITE_FEATURE_BASE - SitePackage.PROJECT__ZONE_ANALYSIS, null, msgs);
+			msgs = basicSetZoneAnalysis(newZoneAnalysis, msgs);
+			if (msgs != null) msgs.dispatch();
+		}
+		else if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, SitePackage.PROJECT__ZONE_ANALYSIS, newZoneAnalysis, newZoneAnalysis));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case SitePackage.PROJECT__SITE:
@@ -545,6 +602,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return ((InternalEList<?>)getColumnTests()).basicRemove(otherEnd, msgs);
 			case SitePackage.PROJECT__UNCERTAINTY:
 				return basicSetUncertainty(null, msgs);
+			case SitePackage.PROJECT__ZONE_ANALYSIS:
+				return basicSetZoneAnalysis(null, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -583,6 +642,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return getColumnTests();
 			case SitePackage.PROJECT__UNCERTAINTY:
 				return getUncertainty();
+			case SitePackage.PROJECT__ZONE_ANALYSIS:
+				return getZoneAnalysis();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -642,6 +703,9 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 			case SitePackage.PROJECT__UNCERTAINTY:
 				setUncertainty((UncertaintySettings)newValue);
 				return;
+			case SitePackage.PROJECT__ZONE_ANALYSIS:
+				setZoneAnalysis((ZoneAnalysisSettings)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -693,6 +757,9 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 			case SitePackage.PROJECT__UNCERTAINTY:
 				setUncertainty((UncertaintySettings)null);
 				return;
+			case SitePackage.PROJECT__ZONE_ANALYSIS:
+				setZoneAnalysis((ZoneAnalysisSettings)null);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -731,6 +798,8 @@ public class ProjectImpl extends MinimalEObjectImpl.Container implements Project
 				return columnTests != null && !columnTests.isEmpty();
 			case SitePackage.PROJECT__UNCERTAINTY:
 				return uncertainty != null;
+			case SitePackage.PROJECT__ZONE_ANALYSIS:
+				return zoneAnalysis != null;
 		}
 		return super.eIsSet(featureID);
 	}

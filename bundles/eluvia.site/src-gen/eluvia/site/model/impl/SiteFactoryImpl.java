@@ -77,6 +77,7 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 			case SitePackage.UNCERTAINTY_SETTINGS: return createUncertaintySettings();
 			case SitePackage.UNCERTAIN_INPUT: return createUncertainInput();
 			case SitePackage.RANK_CORRELATION: return createRankCorrelation();
+			case SitePackage.ZONE_ANALYSIS_SETTINGS: return createZoneAnalysisSettings();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -112,6 +113,12 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 				return createUncertaintySamplingFromString(eDataType, initialValue);
 			case SitePackage.INPUT_DISTRIBUTION_KIND:
 				return createInputDistributionKindFromString(eDataType, initialValue);
+			case SitePackage.ZONE_ESTIMATOR_KIND:
+				return createZoneEstimatorKindFromString(eDataType, initialValue);
+			case SitePackage.NON_DETECT_VALUE:
+				return createNonDetectValueFromString(eDataType, initialValue);
+			case SitePackage.VARIOGRAM_SHAPE_KIND:
+				return createVariogramShapeKindFromString(eDataType, initialValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
 		}
@@ -147,6 +154,12 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 				return convertUncertaintySamplingToString(eDataType, instanceValue);
 			case SitePackage.INPUT_DISTRIBUTION_KIND:
 				return convertInputDistributionKindToString(eDataType, instanceValue);
+			case SitePackage.ZONE_ESTIMATOR_KIND:
+				return convertZoneEstimatorKindToString(eDataType, instanceValue);
+			case SitePackage.NON_DETECT_VALUE:
+				return convertNonDetectValueToString(eDataType, instanceValue);
+			case SitePackage.VARIOGRAM_SHAPE_KIND:
+				return convertVariogramShapeKindToString(eDataType, instanceValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
 		}
@@ -377,6 +390,17 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@Override
+	public ZoneAnalysisSettings createZoneAnalysisSettings() {
+		ZoneAnalysisSettingsImpl zoneAnalysisSettings = new ZoneAnalysisSettingsImpl();
+		return zoneAnalysisSettings;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	public ComplianceCriterion createComplianceCriterionFromString(EDataType eDataType, String initialValue) {
 		ComplianceCriterion result = ComplianceCriterion.get(initialValue);
 		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
@@ -589,6 +613,66 @@ public class SiteFactoryImpl extends EFactoryImpl implements SiteFactory {
 	 * @generated
 	 */
 	public String convertInputDistributionKindToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ZoneEstimatorKind createZoneEstimatorKindFromString(EDataType eDataType, String initialValue) {
+		ZoneEstimatorKind result = ZoneEstimatorKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertZoneEstimatorKindToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public NonDetectValue createNonDetectValueFromString(EDataType eDataType, String initialValue) {
+		NonDetectValue result = NonDetectValue.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertNonDetectValueToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public VariogramShapeKind createVariogramShapeKindFromString(EDataType eDataType, String initialValue) {
+		VariogramShapeKind result = VariogramShapeKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertVariogramShapeKindToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

@@ -14,6 +14,7 @@ import eluvia.site.model.ExcavationDesign;
 import eluvia.site.model.ExcavationSoilType;
 import eluvia.site.model.FlushingDesign;
 import eluvia.site.model.InputDistributionKind;
+import eluvia.site.model.NonDetectValue;
 import eluvia.site.model.NonequilibriumEntry;
 import eluvia.site.model.PriceBook;
 import eluvia.site.model.PriceItem;
@@ -35,7 +36,10 @@ import eluvia.site.model.UncertainInput;
 import eluvia.site.model.UncertaintySampling;
 import eluvia.site.model.UncertaintySettings;
 import eluvia.site.model.UnitSystem;
+import eluvia.site.model.VariogramShapeKind;
 import eluvia.site.model.Vertex;
+import eluvia.site.model.ZoneAnalysisSettings;
+import eluvia.site.model.ZoneEstimatorKind;
 import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.emf.ecore.EClass;
 import org.eclipse.emf.ecore.EEnum;
@@ -196,6 +200,13 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass zoneAnalysisSettingsEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EEnum complianceCriterionEEnum = null;
 
 	/**
@@ -267,6 +278,27 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	private EEnum inputDistributionKindEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum zoneEstimatorKindEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum nonDetectValueEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum variogramShapeKindEEnum = null;
 
 	/**
 	 * Creates an instance of the model <b>Package</b>, registered with
@@ -466,6 +498,16 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	@Override
 	public EReference getProject_Uncertainty() {
 		return (EReference)projectEClass.getEStructuralFeatures().get(12);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getProject_ZoneAnalysis() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(13);
 	}
 
 	/**
@@ -2174,6 +2216,166 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	@Override
+	public EClass getZoneAnalysisSettings() {
+		return zoneAnalysisSettingsEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_Estimator() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_NonDetectRule() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_InverseDistancePower() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_MaximumNeighbours() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_SearchRadiusMetres() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_VerticalDistanceFactor() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_BlockPlanSizeMetres() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_BlockDepthMetres() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_VariogramModel() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_VariogramNuggetMgPerKgSquared() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_VariogramSillMgPerKgSquared() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_VariogramRangeMetres() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_DelayYears() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(12);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_TransverseDispersivityFraction() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(13);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getZoneAnalysisSettings_HotSpotMultiple() {
+		return (EAttribute)zoneAnalysisSettingsEClass.getEStructuralFeatures().get(14);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getComplianceCriterion() {
 		return complianceCriterionEEnum;
 	}
@@ -2284,6 +2486,36 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 	 * @generated
 	 */
 	@Override
+	public EEnum getZoneEstimatorKind() {
+		return zoneEstimatorKindEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EEnum getNonDetectValue() {
+		return nonDetectValueEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EEnum getVariogramShapeKind() {
+		return variogramShapeKindEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public SiteFactory getSiteFactory() {
 		return (SiteFactory)getEFactoryInstance();
 	}
@@ -2321,6 +2553,7 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		createEReference(projectEClass, PROJECT__PRICE_BOOKS);
 		createEReference(projectEClass, PROJECT__COLUMN_TESTS);
 		createEReference(projectEClass, PROJECT__UNCERTAINTY);
+		createEReference(projectEClass, PROJECT__ZONE_ANALYSIS);
 
 		siteEClass = createEClass(SITE);
 		createEAttribute(siteEClass, SITE__NAME);
@@ -2511,6 +2744,23 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		createEReference(rankCorrelationEClass, RANK_CORRELATION__SECOND);
 		createEAttribute(rankCorrelationEClass, RANK_CORRELATION__COEFFICIENT);
 
+		zoneAnalysisSettingsEClass = createEClass(ZONE_ANALYSIS_SETTINGS);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__ESTIMATOR);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__NON_DETECT_RULE);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__INVERSE_DISTANCE_POWER);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__MAXIMUM_NEIGHBOURS);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__SEARCH_RADIUS_METRES);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__VERTICAL_DISTANCE_FACTOR);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__BLOCK_PLAN_SIZE_METRES);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__BLOCK_DEPTH_METRES);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__VARIOGRAM_MODEL);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__VARIOGRAM_NUGGET_MG_PER_KG_SQUARED);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__VARIOGRAM_SILL_MG_PER_KG_SQUARED);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__VARIOGRAM_RANGE_METRES);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__DELAY_YEARS);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__TRANSVERSE_DISPERSIVITY_FRACTION);
+		createEAttribute(zoneAnalysisSettingsEClass, ZONE_ANALYSIS_SETTINGS__HOT_SPOT_MULTIPLE);
+
 		// Create enums
 		complianceCriterionEEnum = createEEnum(COMPLIANCE_CRITERION);
 		unitSystemEEnum = createEEnum(UNIT_SYSTEM);
@@ -2523,6 +2773,9 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		columnTestKindEEnum = createEEnum(COLUMN_TEST_KIND);
 		uncertaintySamplingEEnum = createEEnum(UNCERTAINTY_SAMPLING);
 		inputDistributionKindEEnum = createEEnum(INPUT_DISTRIBUTION_KIND);
+		zoneEstimatorKindEEnum = createEEnum(ZONE_ESTIMATOR_KIND);
+		nonDetectValueEEnum = createEEnum(NON_DETECT_VALUE);
+		variogramShapeKindEEnum = createEEnum(VARIOGRAM_SHAPE_KIND);
 	}
 
 	/**
@@ -2569,6 +2822,7 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		initEReference(getProject_PriceBooks(), this.getPriceBook(), null, "priceBooks", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_ColumnTests(), this.getColumnTest(), null, "columnTests", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Uncertainty(), this.getUncertaintySettings(), null, "uncertainty", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_ZoneAnalysis(), this.getZoneAnalysisSettings(), null, "zoneAnalysis", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(siteEClass, Site.class, "Site", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getSite_Name(), ecorePackage.getEString(), "name", null, 0, 1, Site.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -2759,6 +3013,23 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		initEReference(getRankCorrelation_Second(), this.getUncertainInput(), null, "second", null, 0, 1, RankCorrelation.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getRankCorrelation_Coefficient(), ecorePackage.getEDouble(), "coefficient", null, 0, 1, RankCorrelation.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
+		initEClass(zoneAnalysisSettingsEClass, ZoneAnalysisSettings.class, "ZoneAnalysisSettings", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getZoneAnalysisSettings_Estimator(), this.getZoneEstimatorKind(), "estimator", null, 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_NonDetectRule(), this.getNonDetectValue(), "nonDetectRule", null, 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_InverseDistancePower(), ecorePackage.getEDouble(), "inverseDistancePower", "2.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_MaximumNeighbours(), ecorePackage.getEInt(), "maximumNeighbours", "16", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_SearchRadiusMetres(), ecorePackage.getEDouble(), "searchRadiusMetres", "0.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_VerticalDistanceFactor(), ecorePackage.getEDouble(), "verticalDistanceFactor", "10.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_BlockPlanSizeMetres(), ecorePackage.getEDouble(), "blockPlanSizeMetres", "0.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_BlockDepthMetres(), ecorePackage.getEDouble(), "blockDepthMetres", "0.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_VariogramModel(), this.getVariogramShapeKind(), "variogramModel", null, 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_VariogramNuggetMgPerKgSquared(), ecorePackage.getEDouble(), "variogramNuggetMgPerKgSquared", "0.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_VariogramSillMgPerKgSquared(), ecorePackage.getEDouble(), "variogramSillMgPerKgSquared", "0.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_VariogramRangeMetres(), ecorePackage.getEDouble(), "variogramRangeMetres", "0.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_DelayYears(), ecorePackage.getEDouble(), "delayYears", null, 0, -1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, !IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_TransverseDispersivityFraction(), ecorePackage.getEDouble(), "transverseDispersivityFraction", "0.1", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getZoneAnalysisSettings_HotSpotMultiple(), ecorePackage.getEDouble(), "hotSpotMultiple", "10.0", 0, 1, ZoneAnalysisSettings.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
 		// Initialize enums and add enum literals
 		initEEnum(complianceCriterionEEnum, ComplianceCriterion.class, "ComplianceCriterion");
 		addEEnumLiteral(complianceCriterionEEnum, ComplianceCriterion.EFFLUENT);
@@ -2814,6 +3085,20 @@ public class SitePackageImpl extends EPackageImpl implements SitePackage {
 		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.LOGNORMAL);
 		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.UNIFORM);
 		addEEnumLiteral(inputDistributionKindEEnum, InputDistributionKind.TRIANGULAR);
+
+		initEEnum(zoneEstimatorKindEEnum, ZoneEstimatorKind.class, "ZoneEstimatorKind");
+		addEEnumLiteral(zoneEstimatorKindEEnum, ZoneEstimatorKind.INVERSE_DISTANCE);
+		addEEnumLiteral(zoneEstimatorKindEEnum, ZoneEstimatorKind.ORDINARY_KRIGING);
+
+		initEEnum(nonDetectValueEEnum, NonDetectValue.class, "NonDetectValue");
+		addEEnumLiteral(nonDetectValueEEnum, NonDetectValue.HALF_DETECTION_LIMIT);
+		addEEnumLiteral(nonDetectValueEEnum, NonDetectValue.DETECTION_LIMIT);
+		addEEnumLiteral(nonDetectValueEEnum, NonDetectValue.ZERO);
+
+		initEEnum(variogramShapeKindEEnum, VariogramShapeKind.class, "VariogramShapeKind");
+		addEEnumLiteral(variogramShapeKindEEnum, VariogramShapeKind.SPHERICAL);
+		addEEnumLiteral(variogramShapeKindEEnum, VariogramShapeKind.EXPONENTIAL);
+		addEEnumLiteral(variogramShapeKindEEnum, VariogramShapeKind.GAUSSIAN);
 
 		// Create resource
 		createResource(eNS_URI);

@@ -148,6 +148,10 @@ public class SiteAdapterFactory extends AdapterFactoryImpl {
 				return createRankCorrelationAdapter();
 			}
 			@Override
+			public Adapter caseZoneAnalysisSettings(ZoneAnalysisSettings object) {
+				return createZoneAnalysisSettingsAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -444,6 +448,20 @@ public class SiteAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createRankCorrelationAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link eluvia.site.model.ZoneAnalysisSettings <em>Zone Analysis Settings</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see eluvia.site.model.ZoneAnalysisSettings
+	 * @generated
+	 */
+	public Adapter createZoneAnalysisSettingsAdapter() {
 		return null;
 	}
 
