@@ -111,7 +111,7 @@ public final class Bindings {
         FieldState state = new FieldState();
         Runnable show = () -> {
             state.updating = true;
-            text.setText(Numbers.format(units.toDisplay(((Number) owner.eGet(attribute)).doubleValue(), spec.dimension())));
+            text.setText(display(attribute, owner.eGet(attribute), spec, units));
             state.updating = false;
             markGood(text, decoration);
         };
@@ -300,6 +300,18 @@ public final class Bindings {
         text.setBackground(null);
         decoration.hide();
         messages.set(text, null);
+    }
+
+    /**
+     * A number attribute's value as shown: whole numbers of integer attributes exactly (a seed or a
+     * count must not be rounded), others to six significant figures in the units shown.
+     */
+    static String display(EAttribute attribute, Object value, NumberSpec spec, UnitDisplay units) {
+        Class<?> type = attribute.getEAttributeType().getInstanceClass();
+        if (type == int.class || type == Integer.class || type == long.class || type == Long.class) {
+            return Long.toString(((Number) value).longValue());
+        }
+        return Numbers.format(units.toDisplay(((Number) value).doubleValue(), spec.dimension()));
     }
 
     /**

@@ -94,8 +94,7 @@ public final class ObjectTable<T extends EObject> {
     public ObjectTable<T> number(EAttribute attribute, NumberSpec spec) {
         UnitDisplay units = bindings.units();
         String header = spec.label(units);
-        Function<T, String> text = t -> Numbers.format(units.toDisplay(((Number) t.eGet(attribute)).doubleValue(),
-                spec.dimension()));
+        Function<T, String> text = t -> Bindings.display(attribute, t.eGet(attribute), spec, units);
         Column<T> column = new Column<>(header, text, attribute);
         addColumn(column, new EditingSupport(viewer) {
             private final TextCellEditor editor = new TextCellEditor(viewer.getTable(), SWT.RIGHT);

@@ -164,6 +164,29 @@ final class EditorWorkflowTest {
     }
 
     @Test
+    void everyPageOfTheExampleOpensAndIsPictured() throws Exception {
+        try (ProjectFixture f = ProjectFixture.example(dir, UnitSystem.SI)) {
+            f.awaitResults();
+            int pages = f.editor.tabs().getItemCount();
+            assertEquals(11, pages, "site, layers, contaminants, sampling, cleanup levels, zones, flushing, excavation, "
+                    + "price books, column tests, uncertainty");
+            for (int i = 0; i < pages; i++) {
+                f.editor.showPage(i);
+                f.gui.flush();
+                assertNotNull(f.editor.tabs().getItem(i).getControl(), f.editor.tabs().getItem(i).getText());
+                f.gui.screenshot("editor-page-" + (i + 1) + "-" + f.editor.tabs().getItem(i).getText().replace(' ', '-'));
+            }
+            assertTrue(f.editor.fieldMessages().isEmpty(), "the example's values are all within their fields' ranges: "
+                    + f.editor.fieldMessages());
+            // whole numbers are shown exactly, never rounded to six figures (a seed of eight digits)
+            f.editor.showPage(f.editor.pageIndex("Uncertainty"));
+            f.gui.flush();
+            long seed = f.document.project().getUncertainty().getSeed();
+            assertEquals(Long.toString(seed), Gui.field(f.editor, Text.class, "Seed (same seed, same results) (-)").getText());
+        }
+    }
+
+    @Test
     void theExcavationCautionShowsWhileThePitIsDeeperThanFiveFeet() throws Exception {
         try (ProjectFixture f = ProjectFixture.example(dir, UnitSystem.SI)) {
             f.awaitResults();
