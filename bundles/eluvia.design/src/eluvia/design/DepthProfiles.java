@@ -88,6 +88,8 @@ public final class DepthProfiles {
      * @param result the design's result from {@link DesignPipeline}
      * @param contaminantName a contaminant of the result ({@link ContaminantFlushing#contaminantName()})
      * @param sharesOfDesign shares of the design's pore volumes (dimensionless), each 0 to 1, at least one
+     * @return the profiles, or a set that says why there are none (the cleanup level not reached, inputs
+     *         the layered solution cannot describe or does not accept)
      * @throws IllegalArgumentException for a null or unknown argument or a share outside 0 to 1
      */
     public static DepthProfileSet of(Project project, FlushingDesignResult result, String contaminantName,
@@ -125,6 +127,20 @@ public final class DepthProfiles {
             return DepthProfileSet.notAvailable(result.designName(), contaminantName, why);
         }
 
+        try {
+            return run(project, result, design, zone, c, entry, row, shares);
+        } catch (TransportInputException e) {
+            return DepthProfileSet.notAvailable(result.designName(), contaminantName, "the layered solution does not "
+                    + "accept the inputs: " + e.getMessage());
+        } catch (DesignInputException e) {
+            return DepthProfileSet.notAvailable(result.designName(), contaminantName, "the layered solution does not "
+                    + "accept the inputs: " + e.getMessage());
+        }
+    }
+
+    private static DepthProfileSet run(Project project, FlushingDesignResult result, FlushingDesign design,
+            TreatmentZone zone, Contaminant c, NonequilibriumEntry entry, ContaminantFlushing row, double[] shares) {
+        String contaminantName = row.contaminantName();
         List<LayerCombination.Slice> slices = LayerCombination.slices(project.getSite().getLayers(),
                 zone.getTopDepthMetres(), zone.getBottomDepthMetres());
         double decayPerDay = c.getHalfLifeDays() > 0 ? Math.log(2) / c.getHalfLifeDays() : 0;

@@ -20,6 +20,8 @@ import eluvia.design.Cautions;
 import eluvia.design.ContaminantFlushing;
 import eluvia.design.ContaminantZone;
 import eluvia.design.CostOfDelayResult;
+import eluvia.design.DepthProfileSet;
+import eluvia.design.DepthProfiles;
 import eluvia.design.DesignRun;
 import eluvia.design.EnlargementPoint;
 import eluvia.design.EnteredZoneComparison;
@@ -34,6 +36,7 @@ import eluvia.design.uncertainty.OutputStatistics;
 import eluvia.design.ZoneAnalysis;
 import eluvia.design.ZoneEnlargement;
 import eluvia.report.chart.BarChart;
+import eluvia.report.chart.DepthProfile;
 import eluvia.report.chart.LineChart;
 import eluvia.report.chart.PlanView;
 import eluvia.report.chart.SectionView;
@@ -311,7 +314,7 @@ public final class DesignReport {
         d.section(Section.of(RESULTS, 1, Paragraph.of("Results of each flushing design, the zone "
                 + "estimated from the samples, the zone's enlargement by dispersion and the excavation take-offs.")));
         for (FlushingDesignResult r : flushing) {
-            flushingSection(d, r, run);
+            flushingSection(d, r, run, p);
         }
         zoneSection(d, p, run.zoneAnalysis());
         enlargementSection(d, p, run.enlargements());
@@ -414,7 +417,7 @@ public final class DesignReport {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
-    private static void flushingSection(Document.Builder d, FlushingDesignResult r, DesignRun run) {
+    private static void flushingSection(Document.Builder d, FlushingDesignResult r, DesignRun run, Project p) {
         List<Block> b = new ArrayList<>();
         b.add(headline(r, run));
         b.add(Paragraph.of("Controlling contaminant: " + (r.controllingContaminant() == null ? "none reaches its target"
@@ -448,6 +451,19 @@ public final class DesignReport {
                 + "flushed for " + r.designName() + ", for each contaminant and criterion: the equilibrium finite-layer "
                 + "solution (Brenner 1962) and, where given, the two-region solution, sampled at "
                 + ResultFigures.CURVE_POINTS + " points; markers at the design pore volumes and the targets."));
+        DepthProfileSet depth = DepthProfiles.ofControlling(p, r);
+        DepthProfile profiles = ResultFigures.depthProfiles(depth);
+        if (profiles != null) {
+            b.add(new Figure(ResultFigures.id("depth", r.designName()), profiles, "Residual soil concentration (mg/kg) "
+                    + "of " + depth.contaminantName() + " against depth below ground (m) over the treated column of "
+                    + r.designName() + " at 0, 25, 50 and 100 % of the design's " + num(depth.designPoreVolumes())
+                    + " pore volumes (calendar days in the legend): " + depth.basis() + ". Cleanup level and layer "
+                    + "bases marked; cells below " + ResultFigures.SMALLEST_FRACTION_DRAWN + " of the initial "
+                    + "concentration are not drawn."));
+        } else if (!depth.available()) {
+            b.add(Paragraph.of("No concentration-against-depth profiles for " + r.designName() + ": "
+                    + depth.unavailableReason() + "."));
+        }
         if (!r.pushDown().isEmpty()) {
             Table.Builder t = Table.with(Column.text("Contaminant"), Column.number("Deepest below layer", "m"),
                     Column.number("Still above target at end", "m"), Column.number("Peak C/C0 below at end", Column.DIMENSIONLESS));

@@ -7,6 +7,8 @@ import java.util.Locale;
 import eluvia.cost.CostEstimate;
 import eluvia.design.AlternativeResult;
 import eluvia.design.ContaminantFlushing;
+import eluvia.design.DepthProfileSet;
+import eluvia.design.DepthProfiles;
 import eluvia.design.EnlargementPoint;
 import eluvia.design.FlushingDesignResult;
 import eluvia.design.FlushingMethod;
@@ -14,6 +16,7 @@ import eluvia.design.ZoneEnlargement;
 import eluvia.report.chart.Axis;
 import eluvia.report.chart.BarChart;
 import eluvia.report.chart.BarSeries;
+import eluvia.report.chart.DepthProfile;
 import eluvia.report.chart.LineChart;
 import eluvia.report.chart.Marker;
 import eluvia.report.chart.Outline;
@@ -78,6 +81,55 @@ public final class ResultFigures {
                 : List.of();
         return new LineChart("", Axis.dimensionless("Pore volumes flushed"),
                 Axis.dimensionless("Remaining fraction C/C0"), series, true, pv, targets);
+    }
+
+    /**
+     * Residual soil concentration against depth over the treated column for the controlling
+     * contaminant of a design at 0, 25 %, 50 % and 100 % of the design's pore volumes, as the design
+     * bundle computes them ({@link DepthProfiles#ofControlling}); one series per time, named with its
+     * pore volumes and calendar days; a vertical marker at the cleanup level, horizontal markers at
+     * the layer bases. Logarithmic concentration axis: cells below {@link #SMALLEST_FRACTION_DRAWN}
+     * of the initial concentration are left out. Null when the design has no profiles (the set says why).
+     */
+    public static DepthProfile depthProfiles(DepthProfileSet s) {
+        if (s == null || !s.available() || s.profiles().isEmpty()) {
+            return null;
+        }
+        List<XySeries> series = new ArrayList<>();
+        for (DepthProfileSet.Profile p : s.profiles()) {
+            String name = String.format(Locale.ROOT, "%s PV (%s %% of design, day %s)", InputTables.number(p.poreVolumes()),
+                    InputTables.number(100 * p.shareOfDesign()), InputTables.number(p.calendarDays()));
+            double[] c = p.soilMilligramsPerKg();
+            double[] z = p.depthBelowGroundMetres();
+            double floor = SMALLEST_FRACTION_DRAWN * s.initialSoilMilligramsPerKg();
+            int n = 0;
+            for (double v : c) {
+                n += v >= floor ? 1 : 0;
+            }
+            double[] x = new double[n];
+            double[] y = new double[n];
+            for (int i = 0, k = 0; i < c.length; i++) {
+                if (c[i] >= floor) {
+                    x[k] = c[i];
+                    y[k++] = z[i];
+                }
+            }
+            if (n > 0) {
+                series.add(new XySeries(name, x, y));
+            }
+        }
+        if (series.isEmpty()) {
+            return null;
+        }
+        List<Marker> levels = Double.isFinite(s.cleanupLevelMilligramsPerKg()) && s.cleanupLevelMilligramsPerKg() > 0
+                ? List.of(new Marker(s.cleanupLevelMilligramsPerKg(), "cleanup level " + s.contaminantName()))
+                : List.of();
+        List<Marker> bases = new ArrayList<>();
+        for (double b : s.layerBaseDepthsMetres()) {
+            bases.add(new Marker(b, "layer base"));
+        }
+        return new DepthProfile("", new Axis("Soil concentration, " + s.contaminantName(), "mg/kg"),
+                new Axis("Depth below ground", "m"), series, true, levels, bases);
     }
 
     /** The largest pore volumes drawn: a little past the design's, or the search limit when the target is not reached. */
