@@ -43,12 +43,14 @@ final class ResultFiguresTest {
             // at T = 0 nothing is flushed yet: C/C0 = 1 (initial condition of every solution)
             assertEquals(0.0, x[0], 0.0);
             assertEquals(1.0, y[0], 1e-9);
-            // the curve falls through the target between the two grid points around the design pore volumes
+            // the curve falls through the target between the two grid points around the design pore volumes;
+            // the pore volumes are found to 1e-9 relative (PoreVolumeSearch), so a grid point next to them may
+            // sit on either side of the target by that much
             int i = 1;
             while (x[i] < r.poreVolumes()) {
                 i++;
             }
-            assertTrue(y[i - 1] >= c.targetFraction() && y[i] <= c.targetFraction() * (1 + 1e-9),
+            assertTrue(y[i - 1] >= c.targetFraction() * (1 - 1e-9) && y[i] <= c.targetFraction() * (1 + 1e-9),
                     r.designName() + ": " + y[i - 1] + " .. " + y[i] + " around target " + c.targetFraction());
             assertEquals(r.poreVolumes(), chart.xMarkers().get(0).value(), 0.0);
         }
