@@ -77,6 +77,8 @@ public final class DesignSettings {
     private final double blockDepthMetres;
     private final double sampleMarginMetres;
     private final double searchRadiusMetres;
+    private final double inverseDistancePower;
+    private final int maximumNeighbours;
     private final VariogramModel variogram;
     private final double[] delayYears;
     private final double transverseDispersivityFraction;
@@ -128,6 +130,16 @@ public final class DesignSettings {
         if (!Double.isNaN(searchRadiusMetres) && !(searchRadiusMetres > 0)) {
             problems.add(problem("searchRadiusMetres", num(searchRadiusMetres),
                     "greater than 0 m (Infinity for no limit), or NaN for the automatic choice", ""));
+        }
+        inverseDistancePower = b.inverseDistancePower;
+        if (!(inverseDistancePower > 0 && inverseDistancePower <= InverseDistanceWeighting.MAX_POWER)) {
+            problems.add(problem("inverseDistancePower", num(inverseDistancePower),
+                    "(0, " + InverseDistanceWeighting.MAX_POWER + "] (dimensionless)", "2 is common practice"));
+        }
+        maximumNeighbours = b.maximumNeighbours;
+        if (!(maximumNeighbours >= 1 && maximumNeighbours <= OrdinaryKriging.MAX_NEIGHBOURS)) {
+            problems.add(problem("maximumNeighbours", Integer.toString(maximumNeighbours),
+                    "1 to " + OrdinaryKriging.MAX_NEIGHBOURS, "16 is a common choice"));
         }
         variogram = b.variogram;
         delayYears = b.delayYears == null ? null : b.delayYears.clone();
@@ -235,20 +247,6 @@ public final class DesignSettings {
         }
         String label = "Zone analysis settings";
         List<eluvia.site.validation.Problem> problems = new ArrayList<>();
-        if (z.getInverseDistancePower() != InverseDistanceWeighting.DEFAULT_POWER) {
-            problems.add(new eluvia.site.validation.Problem(eluvia.site.validation.Severity.ERROR, z, label,
-                    "inverseDistancePower", num(z.getInverseDistancePower()),
-                    num(InverseDistanceWeighting.DEFAULT_POWER) + " (the pipeline's zone analysis takes no other power yet)",
-                    "set the power to " + num(InverseDistanceWeighting.DEFAULT_POWER)));
-        }
-        if (z.getMaximumNeighbours() != InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS
-                || z.getMaximumNeighbours() != OrdinaryKriging.DEFAULT_MAX_NEIGHBOURS) {
-            problems.add(new eluvia.site.validation.Problem(eluvia.site.validation.Severity.ERROR, z, label,
-                    "maximumNeighbours", Integer.toString(z.getMaximumNeighbours()),
-                    InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS
-                            + " (the pipeline's zone analysis takes no other number of neighbours yet)",
-                    "set the most neighbours to " + InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS));
-        }
         if (!problems.isEmpty()) {
             throw new DesignInputException(problems);
         }
@@ -277,6 +275,14 @@ public final class DesignSettings {
         if (!set.contains("searchRadiusMetres")) {
             b.searchRadiusMetres = z.getSearchRadiusMetres() == 0 ? Double.NaN : z.getSearchRadiusMetres();
             b.fromProject.add("searchRadiusMetres");
+        }
+        if (!set.contains("inverseDistancePower")) {
+            b.inverseDistancePower = z.getInverseDistancePower();
+            b.fromProject.add("inverseDistancePower");
+        }
+        if (!set.contains("maximumNeighbours")) {
+            b.maximumNeighbours = z.getMaximumNeighbours();
+            b.fromProject.add("maximumNeighbours");
         }
         if (!set.contains("variogram")) {
             if (z.getVariogramRangeMetres() != 0) {
@@ -327,7 +333,7 @@ public final class DesignSettings {
         return switch (setting) {
         case "zoneEstimator" -> "estimator";
         case "variogram" -> "variogramRangeMetres";
-        case "nonDetectRule", "verticalDistanceFactor", "blockPlanSizeMetres", "blockDepthMetres", "searchRadiusMetres",
+        case "nonDetectRule", "verticalDistanceFactor", "blockPlanSizeMetres", "blockDepthMetres", "searchRadiusMetres", "inverseDistancePower", "maximumNeighbours",
                 "delayYears", "transverseDispersivityFraction", "hotSpotMultiple" -> setting;
         default -> null;
         };
@@ -385,6 +391,16 @@ public final class DesignSettings {
      */
     public double searchRadiusMetres() {
         return searchRadiusMetres;
+    }
+
+    /** Power of the inverse-distance weights (dimensionless; 2, common practice, unless set). */
+    public double inverseDistancePower() {
+        return inverseDistancePower;
+    }
+
+    /** Most samples an estimate uses, for both estimators (16 unless set). */
+    public int maximumNeighbours() {
+        return maximumNeighbours;
     }
 
     /**
@@ -511,6 +527,10 @@ public final class DesignSettings {
         s.add(line("searchRadiusMetres", "search radius (m, scaled)", Double.isNaN(searchRadiusMetres)
                 ? "automatic: the largest nearest-neighbour distance between sampling locations"
                 : fmt(searchRadiusMetres), Double.isNaN(searchRadiusMetres)));
+        s.add(line("inverseDistancePower", "inverse-distance power (-)", fmt(inverseDistancePower),
+                inverseDistancePower == d.inverseDistancePower));
+        s.add(line("maximumNeighbours", "most neighbours of an estimate", Integer.toString(maximumNeighbours),
+                maximumNeighbours == d.maximumNeighbours));
         s.add(line("variogram", "variogram", variogram == null
                 ? "spherical, no nugget, sill = sample variance, range = half the largest sample separation (first guess, not fitted)"
                 : variogram.description(), variogram == null));
@@ -565,6 +585,8 @@ public final class DesignSettings {
         private double blockDepthMetres = Double.NaN;
         private double sampleMarginMetres = DEFAULT_SAMPLE_MARGIN_METRES;
         private double searchRadiusMetres = Double.NaN;
+        private double inverseDistancePower = InverseDistanceWeighting.DEFAULT_POWER;
+        private int maximumNeighbours = InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS;
         private VariogramModel variogram;
         private double[] delayYears = DEFAULT_DELAY_YEARS.clone();
         private double transverseDispersivityFraction = DEFAULT_TRANSVERSE_DISPERSIVITY_FRACTION;
@@ -597,6 +619,8 @@ public final class DesignSettings {
             b.blockDepthMetres = blockDepthMetres;
             b.sampleMarginMetres = sampleMarginMetres;
             b.searchRadiusMetres = searchRadiusMetres;
+            b.inverseDistancePower = inverseDistancePower;
+            b.maximumNeighbours = maximumNeighbours;
             b.variogram = variogram;
             b.delayYears = delayYears == null ? null : delayYears.clone();
             b.transverseDispersivityFraction = transverseDispersivityFraction;
@@ -655,6 +679,20 @@ public final class DesignSettings {
         /** Margin around the samples without a site boundary, m. */
         public Builder sampleMarginMetres(double value) {
             sampleMarginMetres = value;
+            return this;
+        }
+
+        /** Power of the inverse-distance weights (dimensionless, greater than 0). */
+        public Builder inverseDistancePower(double value) {
+            inverseDistancePower = value;
+            set("inverseDistancePower");
+            return this;
+        }
+
+        /** Most samples an estimate uses (IDW and kriging), 1 or more. */
+        public Builder maximumNeighbours(int value) {
+            maximumNeighbours = value;
+            set("maximumNeighbours");
             return this;
         }
 

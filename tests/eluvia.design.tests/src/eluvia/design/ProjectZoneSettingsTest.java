@@ -175,12 +175,17 @@ final class ProjectZoneSettingsTest {
         assertTrue(transverse.message().contains("(0, 1]"), transverse.message());
 
         z.setTransverseDispersivityFraction(0.1);
-        z.setInverseDistancePower(3); // valid in the model, but the pipeline's zone analysis uses power 2 only
-        Problem power = refusal(p, "inverseDistancePower");
-        assertTrue(power.allowedRange().startsWith("2"), power.message());
-
-        z.setInverseDistancePower(2);
+        // the inverse-distance power and the number of neighbours reach the estimators
+        z.setInverseDistancePower(3);
         z.setMaximumNeighbours(24);
-        assertEquals("24", refusal(p, "maximumNeighbours").value());
+        DesignSettings resolved = DesignSettings.defaults().resolvedFor(p);
+        assertEquals(3.0, resolved.inverseDistancePower(), 0.0);
+        assertEquals(24, resolved.maximumNeighbours());
+        assertTrue(resolved.describe().stream().anyMatch(l -> l.startsWith("inverse-distance power") && l.endsWith("[from the project]")),
+                String.join("\n", resolved.describe()));
+        // a value set for the run still wins over the project's
+        assertEquals(2.0, DesignSettings.builder().inverseDistancePower(2).build().resolvedFor(p).inverseDistancePower(), 0.0);
+        assertThrows(DesignInputException.class, () -> DesignSettings.builder().inverseDistancePower(0).build());
+        assertThrows(DesignInputException.class, () -> DesignSettings.builder().maximumNeighbours(0).build());
     }
 }

@@ -160,7 +160,8 @@ public final class ZoneAnalyser {
             if (estimator == ZoneEstimator.ORDINARY_KRIGING) {
                 if (settings.variogram() != null) {
                     variogram = settings.variogram();
-                    variogramBasis = "set for this run: " + variogram.description();
+                    variogramBasis = (settings.fromProject("variogram") ? "from the project: " : "set for this run: ")
+                            + variogram.description();
                 } else if (samples.size() >= 2 && samples.valueVarianceMgPerKgSquared() > 0) {
                     double range = 0.5 * largestDistance(samples);
                     variogram = new VariogramModel(VariogramShape.SPHERICAL, 0, samples.valueVarianceMgPerKgSquared(),
@@ -176,7 +177,8 @@ public final class ZoneAnalyser {
             }
             final int index = done;
             final int count = byContaminant.size();
-            BlockEstimate estimate = estimateByLayer(samples, model, used, variogram, radius, f -> progress.within(units,
+            BlockEstimate estimate = estimateByLayer(samples, model, used, variogram, radius, settings.inverseDistancePower(),
+                    settings.maximumNeighbours(), f -> progress.within(units,
                     (index + f) / count));
             done++;
             double maxSample = 0;
@@ -224,14 +226,14 @@ public final class ZoneAnalyser {
 
     /** Estimates layer by layer of blocks (one depth layer per call of the estimator). */
     static BlockEstimate estimateByLayer(SampleSet samples, BlockModel model, ZoneEstimator estimator,
-            VariogramModel variogram, double searchRadiusMetres, java.util.function.DoubleConsumer fractionDone) {
+            VariogramModel variogram, double searchRadiusMetres, double power, int maximumNeighbours,
+            java.util.function.DoubleConsumer fractionDone) {
         double[] values = new double[model.blockCount()];
         int perLayer = model.planCellCount();
         String description = null;
-        InverseDistanceWeighting idw = new InverseDistanceWeighting(InverseDistanceWeighting.DEFAULT_POWER,
-                searchRadiusMetres, InverseDistanceWeighting.DEFAULT_MAX_NEIGHBOURS);
+        InverseDistanceWeighting idw = new InverseDistanceWeighting(power, searchRadiusMetres, maximumNeighbours);
         OrdinaryKriging kriging = estimator == ZoneEstimator.ORDINARY_KRIGING
-                ? new OrdinaryKriging(variogram, OrdinaryKriging.DEFAULT_MAX_NEIGHBOURS, searchRadiusMetres)
+                ? new OrdinaryKriging(variogram, maximumNeighbours, searchRadiusMetres)
                 : null;
         for (int k = 0; k < model.countDepth(); k++) {
             BlockModel layer = new BlockModel(model.originEastingMetres(), model.originNorthingMetres(),
@@ -344,7 +346,7 @@ public final class ZoneAnalyser {
         double width = Math.max(maxE - minE, 1e-6);
         double height = Math.max(maxN - minN, 1e-6);
         double plan = settings.blockPlanSizeMetres();
-        String planBasis = "set for this run";
+        String planBasis = settings.fromProject("blockPlanSizeMetres") ? "from the project" : "set for this run";
         if (Double.isNaN(plan)) {
             plan = PLAN_SIZES_METRES[PLAN_SIZES_METRES.length - 1];
             for (double s : PLAN_SIZES_METRES) {
@@ -357,7 +359,7 @@ public final class ZoneAnalyser {
                     + " blocks along the longer side";
         }
         double depth = settings.blockDepthMetres();
-        String depthBasis = "set for this run";
+        String depthBasis = settings.fromProject("blockDepthMetres") ? "from the project" : "set for this run";
         if (Double.isNaN(depth)) {
             depth = DEPTH_SIZES_METRES[DEPTH_SIZES_METRES.length - 1];
             for (double s : DEPTH_SIZES_METRES) {
