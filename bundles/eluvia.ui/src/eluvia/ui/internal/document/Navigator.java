@@ -13,4 +13,8 @@ public interface Navigator {
      * @return false when the editor has no place for the object
      */
     boolean reveal(EObject object, EStructuralFeature feature);
+
+    /** New results were published for the editor's document (pages that show results follow them). */
+    default void resultsChanged(ResultState state) {
+    }
 }

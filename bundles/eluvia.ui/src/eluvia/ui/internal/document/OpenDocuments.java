@@ -98,6 +98,7 @@ public final class OpenDocuments {
             return;
         }
         results.put(document, state);
+        navigators.get(document).resultsChanged(state);
         for (Listener l : listeners) {
             l.resultsChanged(document, state);
         }

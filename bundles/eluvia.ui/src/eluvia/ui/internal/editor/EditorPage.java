@@ -31,6 +31,10 @@ abstract class EditorPage {
      */
     abstract boolean reveal(EObject object, EStructuralFeature feature);
 
+    /** New results were published for the document (the default ignores them). */
+    void resultsChanged() {
+    }
+
     /** Whether {@code object} is {@code root} or inside it. */
     static boolean within(EObject object, EObject root) {
         for (EObject o = object; o != null; o = o.eContainer()) {

@@ -19,6 +19,7 @@ import eluvia.site.model.UnitSystem;
 import eluvia.ui.internal.Messages;
 import eluvia.ui.internal.document.Navigator;
 import eluvia.ui.internal.document.ProjectDocument;
+import eluvia.ui.internal.document.ResultState;
 import eluvia.ui.internal.fields.Bindings;
 import eluvia.ui.internal.fields.FieldMessages;
 import eluvia.ui.internal.fields.UnitDisplay;
@@ -26,7 +27,7 @@ import eluvia.ui.internal.fields.UnitDisplay;
 /**
  * The project editor's content: a caution line, one page per part of the project (site, layers,
  * contaminants, sampling, cleanup levels, zones, flushing, excavation, price books, column tests,
- * uncertainty)
+ * uncertainty, zone analysis)
  * and the message line for values that are kept as typed but not accepted. Every edit goes through
  * the document's command stack. Results are not shown here but in the result views, which follow
  * the active editor. The composite computes nothing.
@@ -42,6 +43,7 @@ public final class ProjectEditorComposite extends Composite implements Navigator
     private FieldMessages messages;
     private Bindings bindings;
     private final List<EditorPage> pages = new ArrayList<>();
+    private ResultState latest = ResultState.none();
 
     public ProjectEditorComposite(Composite parent, ProjectDocument document, UnitSystem units, PropertyLibrary library) {
         super(parent, SWT.NONE);
@@ -84,6 +86,7 @@ public final class ProjectEditorComposite extends Composite implements Navigator
         pages.add(new PriceBooksPage(bindings, cautionColour));
         pages.add(new ColumnTestsPage(bindings));
         pages.add(new UncertaintyPage(bindings));
+        pages.add(new ZoneAnalysisPage(bindings, () -> latest));
         for (EditorPage page : pages) {
             CTabItem item = new CTabItem(tabs, SWT.NONE);
             item.setText(page.title());
@@ -171,6 +174,21 @@ public final class ProjectEditorComposite extends Composite implements Navigator
             return true;
         }
         return false;
+    }
+
+    @Override
+    public void resultsChanged(ResultState state) {
+        latest = state == null ? ResultState.none() : state;
+        if (!isDisposed()) {
+            for (EditorPage page : pages) {
+                page.resultsChanged();
+            }
+        }
+    }
+
+    /** The latest results published for the document. */
+    public ResultState latestResults() {
+        return latest;
     }
 
     @Override

@@ -157,6 +157,100 @@ public final class Bindings {
         return text;
     }
 
+    /**
+     * A label and a text field for a many-valued double attribute: the numbers separated by spaces
+     * (or commas). Every number must parse and lie in the spec's range, and the list must increase
+     * strictly when {@code increasing}; otherwise the text stays as typed, marked and explained, and
+     * the model keeps its list. An empty field stores an empty list.
+     */
+    public Text numberList(Composite parent, EObject owner, EAttribute attribute, NumberSpec spec, boolean increasing) {
+        if (!attribute.isMany()) {
+            throw new IllegalArgumentException("numberList needs a many-valued attribute; " + attribute.getName()
+                    + " holds one value (use number(...) for it)");
+        }
+        String label = spec.label(units);
+        label(parent, label);
+        Text text = new Text(parent, SWT.BORDER | SWT.SINGLE);
+        text.setData(LABEL_KEY, label);
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        gd.widthHint = charsWide(text, 40);
+        text.setLayoutData(gd);
+        String allowed = spec.allowed(units) + (increasing ? Messages.Fields_listIncreasing : "");
+        text.setToolTipText(Messages.bind(Messages.Fields_listTooltip, allowed));
+        ControlDecoration decoration = new ControlDecoration(text, SWT.LEFT | SWT.CENTER);
+        decoration.setImage(Marks.bad(text.getDisplay()));
+        decoration.hide();
+        FieldState state = new FieldState();
+        Runnable show = () -> {
+            state.updating = true;
+            text.setText(displayList((List<?>) owner.eGet(attribute), spec, units));
+            state.updating = false;
+            markGood(text, decoration);
+        };
+        show.run();
+        text.addModifyListener(e -> {
+            if (state.updating) {
+                return;
+            }
+            String typed = text.getText().trim();
+            List<Double> stored = new java.util.ArrayList<>();
+            for (String part : typed.isEmpty() ? new String[0] : typed.split("[\\s,;]+")) {
+                double shown = Numbers.parse(part);
+                if (Double.isNaN(shown)) {
+                    markBad(text, decoration, Messages.bind(Messages.Fields_notANumber, new Object[] { label, part, allowed }));
+                    return;
+                }
+                double v = units.toStorage(shown, spec.dimension());
+                if (!spec.range().test(v)) {
+                    markBad(text, decoration, Messages.bind(Messages.Fields_outOfRange, new Object[] { label, part, allowed }));
+                    return;
+                }
+                if (increasing && !stored.isEmpty() && !(v > stored.get(stored.size() - 1))) {
+                    markBad(text, decoration, Messages.bind(Messages.Fields_listNotIncreasing, new Object[] { label, part, allowed }));
+                    return;
+                }
+                stored.add(v);
+            }
+            markGood(text, decoration);
+            if (!sameList(stored, (List<?>) owner.eGet(attribute))) {
+                apply(state, owner, attribute, stored);
+            }
+        });
+        follow(text, owner, attribute, state, () -> {
+            if (text.getBackground().equals(badBackground)
+                    || !text.getText().trim().equals(displayList((List<?>) owner.eGet(attribute), spec, units))) {
+                show.run();
+            }
+        });
+        text.addListener(SWT.FocusOut, e -> state.session = null);
+        register(owner, attribute, text);
+        return text;
+    }
+
+    /** A list of stored numbers as shown: each to six significant figures in the units shown, separated by spaces. */
+    static String displayList(List<?> values, NumberSpec spec, UnitDisplay units) {
+        StringBuilder b = new StringBuilder();
+        for (Object v : values) {
+            if (b.length() > 0) {
+                b.append(' ');
+            }
+            b.append(Numbers.format(units.toDisplay(((Number) v).doubleValue(), spec.dimension())));
+        }
+        return b.toString();
+    }
+
+    private static boolean sameList(List<Double> typed, List<?> current) {
+        if (typed.size() != current.size()) {
+            return false;
+        }
+        for (int i = 0; i < typed.size(); i++) {
+            if (!Numbers.same(typed.get(i), ((Number) current.get(i)).doubleValue())) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** A label and a text field for a string attribute. */
     public Text text(Composite parent, EObject owner, EAttribute attribute, String label, boolean multiLine) {
         Label l = label(parent, label);

@@ -168,8 +168,8 @@ final class EditorWorkflowTest {
         try (ProjectFixture f = ProjectFixture.example(dir, UnitSystem.SI)) {
             f.awaitResults();
             int pages = f.editor.tabs().getItemCount();
-            assertEquals(11, pages, "site, layers, contaminants, sampling, cleanup levels, zones, flushing, excavation, "
-                    + "price books, column tests, uncertainty");
+            assertEquals(12, pages, "site, layers, contaminants, sampling, cleanup levels, zones, flushing, excavation, "
+                    + "price books, column tests, uncertainty, zone analysis");
             for (int i = 0; i < pages; i++) {
                 f.editor.showPage(i);
                 f.gui.flush();
