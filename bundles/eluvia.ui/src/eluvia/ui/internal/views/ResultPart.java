@@ -34,6 +34,7 @@ public final class ResultPart {
         case "flushing" -> new FlushingResultsView(parent, documents);
         case "poreVolumes" -> new PoreVolumesView(parent, documents);
         case "residualCurves" -> new ResidualCurvesView(parent, documents);
+        case "depthProfiles" -> new DepthProfilesView(parent, documents);
         case "plan" -> new PlanView(parent, documents);
         case "section" -> new SectionView(parent, documents);
         case "enlargement" -> new EnlargementView(parent, documents);
