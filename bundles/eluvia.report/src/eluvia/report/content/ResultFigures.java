@@ -97,8 +97,9 @@ public final class ResultFigures {
         }
         List<XySeries> series = new ArrayList<>();
         for (DepthProfileSet.Profile p : s.profiles()) {
-            String name = String.format(Locale.ROOT, "%s PV (%s %% of design, day %s)", InputTables.number(p.poreVolumes()),
-                    InputTables.number(100 * p.shareOfDesign()), InputTables.number(p.calendarDays()));
+            // legend text: three significant figures are enough to tell the times apart (the CSV keeps every digit)
+            String name = String.format(Locale.ROOT, "%.3g PV (%.0f %% of design, day %.3g)", p.poreVolumes(),
+                    100 * p.shareOfDesign(), p.calendarDays());
             double[] c = p.soilMilligramsPerKg();
             double[] z = p.depthBelowGroundMetres();
             double floor = SMALLEST_FRACTION_DRAWN * s.initialSoilMilligramsPerKg();
