@@ -45,21 +45,28 @@ public class EqualAccuracyBenchmark {
     private static final double MAX_PORE_VOLUMES = 1000;
 
     /**
-     * peclet:accuracy. The settings per case (found by scanning cells, tolerances and steps):
+     * Layer Peclet number and accuracy. The settings of each case are the cheapest found by
+     * scanning cell counts with, for the implicit solver, fixed steps of 0.01 to 0.08 pore
+     * volumes, adaptive tolerances 1e-3 to 1e-5 and Richardson extrapolation, and for the
+     * baseline relative tolerances 1e-3 to 1e-5:
      * <ul>
-     * <li>P10-1e-3: implicit 30 cells, adaptive steps, tolerance 1e-5; baseline 20 cells, rel. tol. 1e-4;</li>
-     * <li>P1-1e-3: implicit 20 cells, adaptive, tolerance 1e-5; baseline 20 cells, rel. tol. 1e-4;</li>
-     * <li>P10-3e-5: implicit Richardson-extrapolated (20 and 40 cells, steps 0.01 and 0.005 pore
-     * volumes); baseline 120 cells, rel. tol. 1e-4.</li>
+     * <li>P10-1e-3: implicit 24 cells, fixed steps of 0.02 pore volumes; baseline 14 cells, rel. tol. 1e-3;</li>
+     * <li>P1-1e-3: implicit 12 cells, fixed steps of 0.05; baseline 14 cells, rel. tol. 1e-4;</li>
+     * <li>P10-3e-5: implicit Richardson-extrapolated, 16 and 32 cells, steps 0.04 and 0.02;
+     * baseline 100 cells, rel. tol. 1e-4;</li>
+     * <li>P1-3e-5: implicit Richardson-extrapolated, 8 and 16 cells, steps 0.08 and 0.04;
+     * baseline 50 cells, rel. tol. 1e-3.</li>
      * </ul>
      */
-    @Param({ "P10-1e-3", "P1-1e-3", "P10-3e-5" })
+    @Param({ "P10-1e-3", "P1-1e-3", "P10-3e-5", "P1-3e-5" })
     public String caseName;
 
     private double peclet;
     private int implicitCells;
+    private double implicitStepPoreVolumes;
     private boolean extrapolate;
     private int baselineCells;
+    private double baselineTolerance;
     private FlushingColumn column;
     private NumericalFlushingSolver solver;
     private SolverSettings settings;
@@ -67,34 +74,40 @@ public class EqualAccuracyBenchmark {
     private MethodOfLinesFlushing baseline;
     private double daysPerPoreVolume;
 
+    private void define(double pecletNumber, int cells, double step, boolean richardson, int molCells, double molTol) {
+        peclet = pecletNumber;
+        implicitCells = cells;
+        implicitStepPoreVolumes = step;
+        extrapolate = richardson;
+        baselineCells = molCells;
+        baselineTolerance = molTol;
+    }
+
     @Setup
     public void setUp() {
         double accuracy;
         switch (caseName) {
             case "P10-1e-3" -> {
-                peclet = 10;
-                implicitCells = 30;
-                baselineCells = 20;
+                define(10, 24, 0.02, false, 14, 1e-3);
                 accuracy = 1e-3;
             }
             case "P1-1e-3" -> {
-                peclet = 1;
-                implicitCells = 20;
-                baselineCells = 20;
+                define(1, 12, 0.05, false, 14, 1e-4);
                 accuracy = 1e-3;
             }
             case "P10-3e-5" -> {
-                peclet = 10;
-                implicitCells = 20;
-                extrapolate = true;
-                baselineCells = 120;
+                define(10, 16, 0.04, true, 100, 1e-4);
+                accuracy = 3e-5;
+            }
+            case "P1-3e-5" -> {
+                define(1, 8, 0.08, true, 50, 1e-3);
                 accuracy = 3e-5;
             }
             default -> throw new IllegalArgumentException(caseName);
         }
         column = Cases.column(Cases.layer(1 / peclet, SorptionIsotherm.linear(Cases.kdForRetardation(RETARDATION))), 1);
         SolverSettings.Builder b = SolverSettings.builder().minimumCellsPerLayer(implicitCells).maximumCellPeclet(2);
-        settings = extrapolate ? b.build() : b.stepTolerance(1e-5).build();
+        settings = extrapolate ? b.build() : b.fixedStepPoreVolumes(implicitStepPoreVolumes).build();
         solver = new NumericalFlushingSolver(column, settings);
         request = FlushingRunRequest.upToPoreVolumes(MAX_PORE_VOLUMES).target(CleanupCriterion.EFFLUENT, TARGET).build();
         baseline = new MethodOfLinesFlushing(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
@@ -117,14 +130,15 @@ public class EqualAccuracyBenchmark {
     @Benchmark
     public double implicit() {
         if (extrapolate) {
-            return ExtrapolatedTargetSearch.poreVolumesToTarget(column, settings, 0.01, CleanupCriterion.EFFLUENT, TARGET,
-                    MAX_PORE_VOLUMES).poreVolumes();
+            return ExtrapolatedTargetSearch.poreVolumesToTarget(column, settings, implicitStepPoreVolumes,
+                    CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
         }
         return solver.run(request).outcome(CleanupCriterion.EFFLUENT).poreVolumes();
     }
 
     @Benchmark
     public double methodOfLines() {
-        return baseline.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, 1e-4) / daysPerPoreVolume;
+        return baseline.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, baselineTolerance)
+                / daysPerPoreVolume;
     }
 }
