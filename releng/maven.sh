@@ -14,6 +14,11 @@ if [ ! -x "$mvn39" ]; then
   mkdir -p "$cache"
   mvn -q -B org.apache.maven.plugins:maven-dependency-plugin:3.8.1:copy \
       -Dartifact=org.apache.maven:apache-maven:$version:zip:bin -DoutputDirectory="$cache" >&2
-  (cd "$cache" && unzip -q -o "apache-maven-$version-bin.zip")
+  if command -v unzip >/dev/null 2>&1; then
+    (cd "$cache" && unzip -q -o "apache-maven-$version-bin.zip")
+  else
+    # the JDK's jar tool unpacks zip files too (it does not keep the execute bit)
+    (cd "$cache" && jar xf "apache-maven-$version-bin.zip" && chmod +x "apache-maven-$version/bin/mvn")
+  fi
 fi
 echo "$mvn39"
