@@ -5,17 +5,15 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 
+import eluvia.design.internal.FlushingSolutions;
 import eluvia.design.internal.LayerCombination;
-import eluvia.site.derived.Dispersivities;
 import eluvia.site.model.Contaminant;
 import eluvia.site.model.FlushingDesign;
 import eluvia.site.model.NonequilibriumEntry;
 import eluvia.site.model.Project;
-import eluvia.site.model.SoilLayer;
 import eluvia.site.model.SourceConcentration;
 import eluvia.site.model.TreatmentZone;
 import eluvia.transport.TransportInputException;
-import eluvia.transport.TransportProperties;
 import eluvia.transport.numerical.FlushingColumn;
 import eluvia.transport.numerical.FlushingRunRequest;
 import eluvia.transport.numerical.FlushingRunResult;
@@ -23,7 +21,6 @@ import eluvia.transport.numerical.InitialCondition;
 import eluvia.transport.numerical.NumericalFlushingSolver;
 import eluvia.transport.numerical.ResidualProfile;
 import eluvia.transport.numerical.SolverSettings;
-import eluvia.transport.numerical.SorptionIsotherm;
 
 /**
  * Residual soil concentration against depth over the treated column of a flushing design at chosen
@@ -223,63 +220,13 @@ public final class DepthProfiles {
 
     /** Why the layered solution cannot describe the contaminant, or null (the pipeline's rule). */
     private static String unavailableReason(Contaminant c, NonequilibriumEntry entry) {
-        eluvia.site.model.SorptionIsotherm iso = c.getIsotherm() == null ? eluvia.site.model.SorptionIsotherm.LINEAR
-                : c.getIsotherm();
-        if (entry == NonequilibriumEntry.DIMENSIONLESS) {
-            return "beta and omega entered as dimensionless numbers belong to one homogeneous layer; the layered "
-                    + "profile needs the physical (theta_m/theta, f, alpha) or chemical (F, k) parameters";
-        }
-        if (entry == NonequilibriumEntry.CHEMICAL && iso != eluvia.site.model.SorptionIsotherm.LINEAR) {
-            return "two-site kinetics with a nonlinear isotherm: the rate k maps onto the solver's exchange rate only "
-                    + "for linear sorption";
-        }
-        return null;
+        return FlushingSolutions.numericalUnavailableReason(c, entry);
     }
 
-    /** One layer slice as the pipeline's numerical run builds it. */
+    /** One layer slice as the pipeline's numerical run builds it (the same code). */
     private static eluvia.transport.numerical.SoilLayer layerOf(LayerCombination.Slice s, Contaminant c,
             NonequilibriumEntry entry, double decayPerDay) {
-        SoilLayer l = s.layer();
-        try {
-            eluvia.transport.numerical.SoilLayer.Builder b = eluvia.transport.numerical.SoilLayer.builder()
-                    .thicknessMetres(s.thicknessMetres()).waterContent(l.getWaterContent()).porosity(l.getPorosity())
-                    .bulkDensityKilogramsPerCubicMetre(l.getBulkDensityKgPerCubicMetre()).isotherm(isotherm(c, l))
-                    .dispersivityMetres(Dispersivities.effectiveDispersivityMetres(l))
-                    .freeWaterDiffusionSquareMetresPerSecond(c.getDiffusionSquareMetresPerSecond())
-                    .decayInWaterPerDay(decayPerDay).decayOnSolidsPerDay(decayPerDay);
-            if (entry == NonequilibriumEntry.PHYSICAL) {
-                b.mobileWaterFraction(c.getMobileWaterFraction()).mobileSorbingSiteFraction(c.getMobileSiteFraction())
-                        .massTransferRatePerDay(c.getMassTransferRatePerDay());
-            } else if (entry == NonequilibriumEntry.CHEMICAL) {
-                double rhoKgPerLitre = l.getBulkDensityKgPerCubicMetre() / 1000;
-                double alphaPerDay = c.getMassTransferRatePerDay() * (1 - c.getMobileSiteFraction()) * rhoKgPerLitre
-                        * kdOf(c, l);
-                b.mobileWaterFraction(1).mobileSorbingSiteFraction(c.getMobileSiteFraction())
-                        .massTransferRatePerDay(alphaPerDay);
-            }
-            return b.build();
-        } catch (TransportInputException e) {
-            throw DesignInputException.of(l, "Layer '" + l.getName() + "'", e.quantity(), e.value(), e.allowedRange(),
-                    "correct the layer or the contaminant's parameters for the depth profile");
-        }
-    }
-
-    private static SorptionIsotherm isotherm(Contaminant c, SoilLayer layer) {
-        eluvia.site.model.SorptionIsotherm iso = c.getIsotherm() == null ? eluvia.site.model.SorptionIsotherm.LINEAR
-                : c.getIsotherm();
-        switch (iso) {
-            case FREUNDLICH:
-                return SorptionIsotherm.freundlich(c.getFreundlichKfMgPerKgPerMgPerLitreToN(), c.getFreundlichExponent());
-            case LANGMUIR:
-                return SorptionIsotherm.langmuir(c.getLangmuirMaximumMilligramsPerKg(),
-                        c.getLangmuirConstantLitresPerMilligram());
-            default:
-                return SorptionIsotherm.linear(kdOf(c, layer));
-        }
-    }
-
-    private static double kdOf(Contaminant c, SoilLayer layer) {
-        return c.isKdEntered() ? c.getKdLitresPerKg()
-                : TransportProperties.kdFromKoc(c.getKocLitresPerKg(), layer.getOrganicCarbonFraction());
+        return FlushingSolutions.numericalLayer(s, c, entry, decayPerDay,
+                "correct the layer or the contaminant's parameters for the depth profile");
     }
 }

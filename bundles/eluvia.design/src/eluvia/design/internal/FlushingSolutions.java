@@ -236,7 +236,7 @@ public final class FlushingSolutions {
     }
 
     /** Why the numerical solution cannot describe this contaminant, or null when it can. */
-    static String numericalUnavailableReason(Contaminant c, NonequilibriumEntry entry) {
+    public static String numericalUnavailableReason(Contaminant c, NonequilibriumEntry entry) {
         eluvia.site.model.SorptionIsotherm iso = c.getIsotherm() == null ? eluvia.site.model.SorptionIsotherm.LINEAR
                 : c.getIsotherm();
         if (entry == NonequilibriumEntry.DIMENSIONLESS) {
@@ -281,6 +281,40 @@ public final class FlushingSolutions {
                 : TransportProperties.kdFromKoc(c.getKocLitresPerKg(), layer.getOrganicCarbonFraction());
     }
 
+    /**
+     * One slice of the treated column as the numerical solver's layer: the layer's soil, the
+     * contaminant's isotherm (Kd per layer from Koc foc unless entered), decay in water and on solids,
+     * and the two-region or two-site parameters of the contaminant's nonequilibrium entry (chemical:
+     * exchange rate alpha = k (1 - F) rho_b Kd). Shared by the pipeline's numerical run and the depth
+     * profiles so both describe the same column.
+     *
+     * @param decayPerDay first-order decay rate, 1/d
+     * @param fix what the message of a refused value tells the user to do
+     */
+    public static eluvia.transport.numerical.SoilLayer numericalLayer(LayerCombination.Slice s, Contaminant c,
+            NonequilibriumEntry entry, double decayPerDay, String fix) {
+        SoilLayer l = s.layer();
+        eluvia.transport.numerical.SoilLayer.Builder b = eluvia.transport.numerical.SoilLayer.builder()
+                .thicknessMetres(s.thicknessMetres()).waterContent(l.getWaterContent()).porosity(l.getPorosity())
+                .bulkDensityKilogramsPerCubicMetre(l.getBulkDensityKgPerCubicMetre()).isotherm(isotherm(c, l))
+                .dispersivityMetres(Dispersivities.effectiveDispersivityMetres(l))
+                .freeWaterDiffusionSquareMetresPerSecond(c.getDiffusionSquareMetresPerSecond())
+                .decayInWaterPerDay(decayPerDay).decayOnSolidsPerDay(decayPerDay);
+        if (entry == NonequilibriumEntry.PHYSICAL) {
+            b.mobileWaterFraction(c.getMobileWaterFraction()).mobileSorbingSiteFraction(c.getMobileSiteFraction())
+                    .massTransferRatePerDay(c.getMassTransferRatePerDay());
+        } else if (entry == NonequilibriumEntry.CHEMICAL) {
+            double rhoKgPerLitre = l.getBulkDensityKgPerCubicMetre() / 1000;
+            double alpha = c.getMassTransferRatePerDay() * (1 - c.getMobileSiteFraction()) * rhoKgPerLitre * kdOf(c, l);
+            b.mobileWaterFraction(1).mobileSorbingSiteFraction(c.getMobileSiteFraction()).massTransferRatePerDay(alpha);
+        }
+        try {
+            return b.build();
+        } catch (TransportInputException e) {
+            throw DesignInputException.of(l, "Layer '" + l.getName() + "'", e.quantity(), e.value(), e.allowedRange(), fix);
+        }
+    }
+
     /** The numerical run: returns the method estimate and the detail. */
     private static Object[] runNumerical(List<LayerCombination.Slice> slices, FlushingDesign design, Contaminant c,
             NonequilibriumEntry entry, double initialMgPerKg, double target, RunProgress progress) {
@@ -289,30 +323,14 @@ public final class FlushingSolutions {
         double thickness = 0;
         String nonequilibrium = "local equilibrium";
         for (LayerCombination.Slice s : slices) {
-            SoilLayer l = s.layer();
-            eluvia.transport.numerical.SoilLayer.Builder b = eluvia.transport.numerical.SoilLayer.builder()
-                    .thicknessMetres(s.thicknessMetres()).waterContent(l.getWaterContent()).porosity(l.getPorosity())
-                    .bulkDensityKilogramsPerCubicMetre(l.getBulkDensityKgPerCubicMetre()).isotherm(isotherm(c, l))
-                    .dispersivityMetres(Dispersivities.effectiveDispersivityMetres(l))
-                    .freeWaterDiffusionSquareMetresPerSecond(c.getDiffusionSquareMetresPerSecond())
-                    .decayInWaterPerDay(decayPerDay).decayOnSolidsPerDay(decayPerDay);
+            layers.add(numericalLayer(s, c, entry, decayPerDay,
+                    "correct the layer or the contaminant's parameters for the numerical solution"));
             if (entry == NonequilibriumEntry.PHYSICAL) {
-                b.mobileWaterFraction(c.getMobileWaterFraction()).mobileSorbingSiteFraction(c.getMobileSiteFraction())
-                        .massTransferRatePerDay(c.getMassTransferRatePerDay());
                 nonequilibrium = "physical two-region in every layer: theta_m/theta = " + c.getMobileWaterFraction()
                         + ", f = " + c.getMobileSiteFraction() + ", alpha = " + c.getMassTransferRatePerDay() + " 1/d";
             } else if (entry == NonequilibriumEntry.CHEMICAL) {
-                double rhoKgPerLitre = l.getBulkDensityKgPerCubicMetre() / 1000;
-                double alpha = c.getMassTransferRatePerDay() * (1 - c.getMobileSiteFraction()) * rhoKgPerLitre * kdOf(c, l);
-                b.mobileWaterFraction(1).mobileSorbingSiteFraction(c.getMobileSiteFraction()).massTransferRatePerDay(alpha);
                 nonequilibrium = "chemical two-site in every layer: F = " + c.getMobileSiteFraction() + ", k = "
                         + c.getMassTransferRatePerDay() + " 1/d as exchange rate alpha = k (1 - F) rho_b Kd per layer";
-            }
-            try {
-                layers.add(b.build());
-            } catch (TransportInputException e) {
-                throw DesignInputException.of(l, "Layer '" + l.getName() + "'", e.quantity(), e.value(), e.allowedRange(),
-                        "correct the layer or the contaminant's parameters for the numerical solution");
             }
             thickness += s.thicknessMetres();
         }
