@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.regex.Matcher;
@@ -20,32 +18,8 @@ import eluvia.site.files.ExampleProjects;
 /** The command line run in-process; the product's processes are tested in eluvia.app.itests. */
 final class CommandLineTest {
 
-    private record Result(int code, String out, String err) {
-    }
-
-    private static Result run(Path dir, String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        Environment env = new Environment() {
-            @Override
-            public byte[] exampleProjectBytes() throws IOException {
-                try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
-                    return in.readAllBytes();
-                }
-            }
-
-            @Override
-            public String exampleProjectName() {
-                return ExampleProjects.RIVERSIDE_DEPOT;
-            }
-
-            @Override
-            public Path workingDirectory() {
-                return dir;
-            }
-        };
-        int code = EluviaCommand.run(args, env, new PrintWriter(out), new PrintWriter(err));
-        return new Result(code, out.toString(), err.toString());
+    private static InProcess.Result run(Path dir, String... args) {
+        return InProcess.run(dir, args);
     }
 
     private static double number(String json, String key) {
@@ -60,7 +34,7 @@ final class CommandLineTest {
 
     @Test
     void flushJsonGivesThePublishedRetardationAndTheWellMixedLimit(@TempDir Path dir) {
-        Result r = run(dir, CHECK_CASE);
+        InProcess.Result r = run(dir, CHECK_CASE);
         assertEquals(0, r.code(), r.err());
         // REFERENCES.md [COMP]: rho_b 1.6 kg/L, theta 0.3, Kd = 59 x 0.002 L/kg -> R = 1.6293
         assertEquals(1.6293, number(r.out(), "retardation"), 5e-5);
@@ -80,7 +54,7 @@ final class CommandLineTest {
     void withoutAreaTheWaterVolumeIsNull(@TempDir Path dir) {
         String[] args = java.util.Arrays.stream(CHECK_CASE).filter(a -> !a.equals("--area-m2") && !a.equals("100"))
                 .toArray(String[]::new);
-        Result r = run(dir, args);
+        InProcess.Result r = run(dir, args);
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("\"waterVolumeM3\": null"), r.out());
     }
@@ -104,7 +78,7 @@ final class CommandLineTest {
                 args = java.util.stream.Stream.concat(java.util.Arrays.stream(args), java.util.stream.Stream.of(c[0], c[1]))
                         .toArray(String[]::new);
             }
-            Result r = run(dir, args);
+            InProcess.Result r = run(dir, args);
             assertEquals(2, r.code(), c[0] + " " + c[1] + ": " + r.out() + r.err());
             assertTrue(r.err().contains(c[0]), "message must name " + c[0] + ": " + r.err());
             assertTrue(r.err().contains(c[2]), "message must give the range '" + c[2] + "': " + r.err());
@@ -113,7 +87,7 @@ final class CommandLineTest {
 
     @Test
     void missingRequiredOptionExitsWithCodeTwo(@TempDir Path dir) {
-        Result r = run(dir, "flush", "--thickness-m", "2");
+        InProcess.Result r = run(dir, "flush", "--thickness-m", "2");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("--water-content"), r.err());
     }
@@ -124,9 +98,9 @@ final class CommandLineTest {
         try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
             Files.copy(in, file);
         }
-        Result check = run(dir, "check", "example.eluvia");
+        InProcess.Result check = run(dir, "check", "example.eluvia");
         assertEquals(0, check.code(), check.out() + check.err());
-        Result design = run(dir, "design", "example.eluvia", "--out", "package");
+        InProcess.Result design = run(dir, "design", "example.eluvia", "--out", "package");
         assertEquals(0, design.code(), design.err());
         assertTrue(Files.isRegularFile(dir.resolve("package/results.json")));
         assertTrue(Files.isRegularFile(dir.resolve("package/index.html")));
@@ -143,17 +117,17 @@ final class CommandLineTest {
         // make the first porosity impossible
         text = text.replaceFirst("porosity=\"[0-9.]+\"", "porosity=\"1.7\"");
         Files.writeString(file, text);
-        Result check = run(dir, "check", "bad.eluvia");
+        InProcess.Result check = run(dir, "check", "bad.eluvia");
         assertEquals(1, check.code(), check.out() + check.err());
         assertTrue(check.out().contains("porosity"), check.out());
-        Result design = run(dir, "design", "bad.eluvia", "--out", "package");
+        InProcess.Result design = run(dir, "design", "bad.eluvia", "--out", "package");
         assertEquals(1, design.code());
         assertTrue(!Files.exists(dir.resolve("package/results.json")), "nothing is written for an invalid project");
     }
 
     @Test
     void demoWritesThePackageUnderTheWorkingFolder(@TempDir Path dir) {
-        Result r = run(dir, "demo");
+        InProcess.Result r = run(dir, "demo");
         assertEquals(0, r.code(), r.err());
         assertTrue(Files.isRegularFile(dir.resolve("eluvia-demo-output/results.json")));
         assertTrue(r.out().contains("invented"), r.out());
@@ -171,8 +145,8 @@ final class CommandLineTest {
     @Test
     void numericalSolverAgreesWithTheFiniteLayerSeries(@TempDir Path dir) {
         // Two independent methods for the same linear problem: the Brenner (1962) series and finite volumes.
-        Result series = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.2", "--criterion", "mean"));
-        Result fv = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.2",
+        InProcess.Result series = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.2", "--criterion", "mean"));
+        InProcess.Result fv = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.2",
                 "--criterion", "mean"));
         assertEquals(0, series.code(), series.err());
         assertEquals(0, fv.code(), fv.err());
@@ -185,8 +159,8 @@ final class CommandLineTest {
     @Test
     void freundlichWithUnitExponentIsLinearSorption(@TempDir Path dir) {
         // S = Kf C^n with n = 1 is the linear isotherm S = Kd C with Kd = Kf (definition of the Freundlich form)
-        Result linear = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.5"));
-        Result freundlich = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1",
+        InProcess.Result linear = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.5"));
+        InProcess.Result freundlich = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1",
                 "--freundlich-kf", "0.5", "--freundlich-n", "1", "--initial-soil-mg-kg", "50"));
         assertEquals(0, freundlich.code(), freundlich.err());
         double a = number(linear.out(), "poreVolumes");
@@ -195,11 +169,11 @@ final class CommandLineTest {
 
     @Test
     void nonlinearSorptionNeedsTheInitialConcentration(@TempDir Path dir) {
-        Result r = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--langmuir-smax", "100",
+        InProcess.Result r = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--langmuir-smax", "100",
                 "--langmuir-k", "0.1"));
         assertEquals(2, r.code());
         assertTrue(r.err().contains("--initial-soil-mg-kg"), r.err());
-        Result wrongModel = run(dir, flushArgs("--thickness-m", "1", "--freundlich-kf", "1", "--freundlich-n", "0.8"));
+        InProcess.Result wrongModel = run(dir, flushArgs("--thickness-m", "1", "--freundlich-kf", "1", "--freundlich-n", "0.8"));
         assertEquals(2, wrongModel.code());
         assertTrue(wrongModel.err().contains("--model numerical"), wrongModel.err());
     }
@@ -208,14 +182,14 @@ final class CommandLineTest {
     void twoLayersOfTheSameSoilAreOneLayer(@TempDir Path dir) throws IOException {
         Files.writeString(dir.resolve("layers.csv"), "thickness_m,water_content,porosity,bulk_density_kg_m3,kd_l_kg,dispersivity_m\n"
                 + "0.5,0.3,0.35,1600,0.2,0.1\n0.5,0.3,0.35,1600,0.2,0.1\n");
-        Result layered = run(dir, flushArgs("--model", "numerical", "--layers", "layers.csv"));
-        Result single = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.2"));
+        InProcess.Result layered = run(dir, flushArgs("--model", "numerical", "--layers", "layers.csv"));
+        InProcess.Result single = run(dir, flushArgs("--model", "numerical", "--thickness-m", "1", "--kd-l-kg", "0.2"));
         assertEquals(0, layered.code(), layered.err());
         double a = number(single.out(), "poreVolumes");
         assertEquals(a, number(layered.out(), "poreVolumes"), a * 0.005);
         Files.writeString(dir.resolve("bad.csv"), "thickness_m,water_content,porosity,bulk_density_kg_m3,kd_l_kg,dispersivity_m\n"
                 + "0.5,0.5,0.35,1600,0.2,0.1\n");
-        Result bad = run(dir, flushArgs("--model", "numerical", "--layers", "bad.csv"));
+        InProcess.Result bad = run(dir, flushArgs("--model", "numerical", "--layers", "bad.csv"));
         assertEquals(2, bad.code());
         assertTrue(bad.err().contains("bad.csv line 2"), bad.err());
     }
@@ -223,14 +197,14 @@ final class CommandLineTest {
     @Test
     void twoRegionWithBetaOneIsEquilibriumAndReportsRebound(@TempDir Path dir) {
         // beta = 1 puts all sorption capacity in equilibrium (van Genuchten and Wierenga 1976): the equilibrium result
-        Result eq = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.5"));
-        Result tr1 = run(dir, flushArgs("--model", "two-region", "--beta", "1", "--omega", "1",
+        InProcess.Result eq = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.5"));
+        InProcess.Result tr1 = run(dir, flushArgs("--model", "two-region", "--beta", "1", "--omega", "1",
                 "--thickness-m", "1", "--kd-l-kg", "0.5"));
         assertEquals(0, tr1.code(), tr1.err());
         double a = number(eq.out(), "poreVolumes");
         assertEquals(a, number(tr1.out(), "poreVolumes"), a * 1e-4);
         // with slow exchange, water meets the target before the soil does, and the water rebounds above it
-        Result tail = run(dir, flushArgs("--model", "two-region", "--beta", "0.4", "--omega", "0.2",
+        InProcess.Result tail = run(dir, flushArgs("--model", "two-region", "--beta", "0.4", "--omega", "0.2",
                 "--thickness-m", "1", "--kd-l-kg", "0.5"));
         assertEquals(0, tail.code(), tail.err());
         assertTrue(number(tail.out(), "poreVolumes") > a, "nonequilibrium tails need more pore volumes");
@@ -253,7 +227,7 @@ final class CommandLineTest {
             csv.append(t).append(',').append(c).append('\n');
         }
         Files.writeString(dir.resolve("curve.csv"), csv.toString());
-        Result r = run(dir, "fit", "curve.csv", "--curve", "breakthrough", "--model", "semi-infinite", "--json");
+        InProcess.Result r = run(dir, "fit", "curve.csv", "--curve", "breakthrough", "--model", "semi-infinite", "--json");
         assertEquals(0, r.code(), r.err());
         Matcher m = Pattern.compile("\"name\": \"R\",\\s*\"value\": ([-0-9.eE+]+)").matcher(r.out());
         assertTrue(m.find(), r.out());
@@ -261,7 +235,7 @@ final class CommandLineTest {
         Matcher p = Pattern.compile("\"name\": \"P\",\\s*\"value\": ([-0-9.eE+]+)").matcher(r.out());
         assertTrue(p.find(), r.out());
         assertEquals(pp, Double.parseDouble(p.group(1)), 0.05);
-        Result bad = run(dir, "fit", "curve.csv", "--curve", "sideways");
+        InProcess.Result bad = run(dir, "fit", "curve.csv", "--curve", "sideways");
         assertEquals(2, bad.code());
         assertTrue(bad.err().contains("--curve"), bad.err());
     }
@@ -275,7 +249,7 @@ final class CommandLineTest {
         // switch the example's uncertainty analysis on, with few runs to keep the test short
         text = text.replace("<uncertainty runCount=\"100\"", "<uncertainty enabled=\"true\" runCount=\"12\"");
         Files.writeString(dir.resolve("mc.eluvia"), text);
-        Result r = run(dir, "design", "mc.eluvia", "--out", "pkg");
+        InProcess.Result r = run(dir, "design", "mc.eluvia", "--out", "pkg");
         assertEquals(0, r.code(), r.err());
         String json = Files.readString(dir.resolve("pkg/results.json"));
         assertTrue(json.contains("\"verification\": {\n    \"passed\": true"), "verification outcome in results.json");

@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -27,32 +25,8 @@ import eluvia.site.model.Project;
 /** The {@code uncertainty} command on the shipped (invented) example, in-process. */
 final class UncertaintyCommandTest {
 
-    private record Result(int code, String out, String err) {
-    }
-
-    private static Result run(Path dir, String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        Environment env = new Environment() {
-            @Override
-            public byte[] exampleProjectBytes() throws IOException {
-                try (InputStream in = ExampleProjects.open(ExampleProjects.RIVERSIDE_DEPOT)) {
-                    return in.readAllBytes();
-                }
-            }
-
-            @Override
-            public String exampleProjectName() {
-                return ExampleProjects.RIVERSIDE_DEPOT;
-            }
-
-            @Override
-            public Path workingDirectory() {
-                return dir;
-            }
-        };
-        int code = EluviaCommand.run(args, env, new PrintWriter(out), new PrintWriter(err));
-        return new Result(code, out.toString(), err.toString());
+    private static InProcess.Result run(Path dir, String... args) {
+        return InProcess.run(dir, args);
     }
 
     private static Path example(Path dir) throws IOException {
@@ -67,7 +41,7 @@ final class UncertaintyCommandTest {
     void printsThePercentilesOfTheAnalysis(@TempDir Path dir) throws Exception {
         Path file = example(dir);
 
-        Result r = run(dir, "uncertainty", "example.eluvia", "--runs", "8", "--seed", "11");
+        InProcess.Result r = run(dir, "uncertainty", "example.eluvia", "--runs", "8", "--seed", "11");
 
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("8 runs (LATIN_HYPERCUBE, seed 11)"), r.out());
@@ -89,7 +63,7 @@ final class UncertaintyCommandTest {
     @Test
     void aBadRunCountIsRefusedWithTheOptionNamed(@TempDir Path dir) throws Exception {
         example(dir);
-        Result r = run(dir, "uncertainty", "example.eluvia", "--runs", "1");
+        InProcess.Result r = run(dir, "uncertainty", "example.eluvia", "--runs", "1");
         assertEquals(EluviaCommand.BAD_OPTION, r.code());
         assertTrue(r.err().toLowerCase(Locale.ROOT).contains("--runs"), r.err());
         assertTrue(r.err().contains("2 to 10000000"), r.err());
@@ -100,7 +74,7 @@ final class UncertaintyCommandTest {
         Path file = example(dir);
         String text = Files.readString(file);
         Files.writeString(file, text.substring(0, text.indexOf("  <uncertainty ")) + "</site:Project>\n");
-        Result r = run(dir, "uncertainty", "example.eluvia");
+        InProcess.Result r = run(dir, "uncertainty", "example.eluvia");
         assertEquals(EluviaCommand.INVALID_PROJECT, r.code(), r.out());
         assertTrue(r.err().contains("uncertainty settings"), r.err());
     }
