@@ -29,9 +29,9 @@ public final class Messages extends NLS {
     public static String Calibration_accept;
     public static String Calibration_accepted;
     public static String Calibration_badColumn;
-    public static String Calibration_badLength;
     public static String Calibration_command;
     public static String Calibration_curveTitle;
+    public static String Calibration_diffusionOnly;
     public static String Calibration_done;
     public static String Calibration_failed;
     public static String Calibration_finite;
@@ -122,6 +122,11 @@ public final class Messages extends NLS {
     public static String DepthProfiles_jobName;
     public static String DepthProfiles_share;
     public static String DesignComputation_jobName;
+    public static String Edit_redo;
+    public static String Edit_redoNamed;
+    public static String Edit_setField;
+    public static String Edit_undo;
+    public static String Edit_undoNamed;
     public static String Editor_add;
     public static String Editor_cannotOpen;
     public static String Editor_nothingSelected;

@@ -19,18 +19,24 @@ import eluvia.site.model.SoilLayer;
 import eluvia.transport.ColumnFitResult;
 import eluvia.transport.ColumnObservation;
 import eluvia.transport.ColumnTestFit;
+import eluvia.transport.TransportInputException;
+import eluvia.transport.TransportProperties;
 import eluvia.ui.internal.Messages;
+import eluvia.ui.internal.editor.Labels;
+import eluvia.ui.internal.fields.Numbers;
 
 /**
  * Column-test calibration through the transport bundle's fitter ({@link ColumnTestFit},
  * Levenberg-Marquardt) and the command that takes the fitted parameters into the project.
  *
  * <p>Taking the parameters in reads the fitted dimensionless numbers back as the project's
- * quantities with the column's own conditions: R = 1 + rho_b Kd / theta (REFERENCES.md; rho_b in
- * kg/L) gives Kd = (R - 1) theta / rho_b; P = v L / D with D = alpha_L v when mechanical
- * dispersion dominates diffusion (REFERENCES.md) gives alpha_L = L / P; beta and omega are the
- * dimensionless two-region parameters as fitted (van Genuchten and Wierenga 1976). These two
- * read-backs are the only arithmetic here; they belong with the fitter and are flagged for it.
+ * quantities with the column's own conditions, by the inverses in {@link TransportProperties}:
+ * Kd from R, and the dispersivity from P with the column's diffusion taken out
+ * (D = alpha_L v + tau D0, v = q / theta; tau by Millington and Quirk for a saturated column,
+ * porosity = water content, as a column test does not record its porosity). When P is above what
+ * diffusion alone gives, the column determines no dispersivity and the layer's is left as it was.
+ * beta and omega are the dimensionless two-region parameters as fitted (van Genuchten and
+ * Wierenga 1976).
  */
 public final class Calibration {
 
@@ -62,50 +68,61 @@ public final class Calibration {
         return ColumnTestFit.fit(observations(test), curve(test), model);
     }
 
-    /** Kd in L/kg from a fitted R and the column's water content and bulk density (kg/m3). */
-    public static double kdLitresPerKg(double retardation, double waterContent, double bulkDensityKgPerCubicMetre) {
-        if (!(retardation >= 1) || !(waterContent > 0 && waterContent < 1) || !(bulkDensityKgPerCubicMetre > 0)) {
-            throw new IllegalArgumentException(Messages.bind(Messages.Calibration_badColumn, new Object[] {
-                    retardation, waterContent, bulkDensityKgPerCubicMetre }));
-        }
-        return (retardation - 1) * waterContent / (bulkDensityKgPerCubicMetre / 1000);
-    }
-
-    /** Longitudinal dispersivity in m from a fitted Peclet number and the column length (m). */
-    public static double dispersivityMetres(double peclet, double columnLengthMetres) {
-        if (!(peclet > 0) || !(columnLengthMetres > 0)) {
-            throw new IllegalArgumentException(Messages.bind(Messages.Calibration_badLength, peclet, columnLengthMetres));
-        }
-        return columnLengthMetres / peclet;
+    /**
+     * What taking a fit in does: the command, and why the layer's dispersivity was left as it was
+     * (null when it was set, or the test names no layer).
+     */
+    public record Acceptance(Command command, String dispersivityNote) {
     }
 
     /**
      * The undoable command that takes a fit into the project: Kd (entered) of the test's
-     * contaminant, the entered dispersivity of its layer (when it has one), and for a two-region fit
-     * beta and omega (entered as dimensionless numbers).
+     * contaminant, the entered dispersivity of its layer (when it has one and the column determines
+     * one beyond diffusion), and for a two-region fit beta and omega (entered as dimensionless
+     * numbers).
      *
-     * @return the command, or null when the test has no contaminant
+     * @return the command and its note, or null when the test has no contaminant
+     * @throws IllegalArgumentException when a column condition is outside its range: the message
+     *         names it, its value, the range, and where to correct it
      */
-    public static Command accept(EditingDomain domain, ColumnTest test, ColumnFitResult fit) {
+    public static Acceptance accept(EditingDomain domain, ColumnTest test, ColumnFitResult fit) {
         Contaminant c = test.getContaminant();
         if (c == null) {
             return null;
         }
         CompoundCommand all = new CompoundCommand(Messages.bind(Messages.Calibration_command, test.getName()));
-        double kd = kdLitresPerKg(fit.parameter("R").value(), test.getWaterContent(), test.getBulkDensityKgPerCubicMetre());
-        all.append(SetCommand.create(domain, c, P.getContaminant_KdEntered(), Boolean.TRUE));
-        all.append(SetCommand.create(domain, c, P.getContaminant_KdLitresPerKg(), kd));
-        SoilLayer layer = test.getLayer();
-        if (layer != null) {
-            double alpha = dispersivityMetres(fit.parameter("P").value(), test.getColumnLengthMetres());
-            all.append(SetCommand.create(domain, layer, P.getSoilLayer_DispersivityRule(), DispersivityRule.ENTERED));
-            all.append(SetCommand.create(domain, layer, P.getSoilLayer_DispersivityMetres(), alpha));
+        String note = null;
+        try {
+            double theta = test.getWaterContent();
+            double kd = TransportProperties.kdFromRetardationLitresPerKg(fit.parameter("R").value(),
+                    test.getBulkDensityKgPerCubicMetre(), theta);
+            all.append(SetCommand.create(domain, c, P.getContaminant_KdEntered(), Boolean.TRUE));
+            all.append(SetCommand.create(domain, c, P.getContaminant_KdLitresPerKg(), kd));
+            SoilLayer layer = test.getLayer();
+            if (layer != null) {
+                double peclet = fit.parameter("P").value();
+                double length = test.getColumnLengthMetres();
+                double v = TransportProperties.poreWaterVelocityMetresPerDay(test.getDarcyFluxMetresPerDay(), theta);
+                double tau = TransportProperties.millingtonQuirkTortuosity(theta, theta);
+                double d0 = c.getDiffusionSquareMetresPerSecond();
+                double limit = TransportProperties.diffusionOnlyPeclet(length, v, tau, d0);
+                if (peclet <= limit) {
+                    double alpha = TransportProperties.dispersivityFromPecletMetres(peclet, length, v, tau, d0);
+                    all.append(SetCommand.create(domain, layer, P.getSoilLayer_DispersivityRule(), DispersivityRule.ENTERED));
+                    all.append(SetCommand.create(domain, layer, P.getSoilLayer_DispersivityMetres(), alpha));
+                } else {
+                    note = Messages.bind(Messages.Calibration_diffusionOnly, new Object[] { Numbers.format(peclet, 4),
+                            Numbers.format(limit, 4), Labels.name(layer) });
+                }
+            }
+        } catch (TransportInputException e) {
+            throw new IllegalArgumentException(Messages.bind(Messages.Calibration_badColumn, e.getMessage(), test.getName()), e);
         }
         if (fit.model() == ColumnTestFit.Model.FINITE_TWO_REGION) {
             all.append(SetCommand.create(domain, c, P.getContaminant_Nonequilibrium(), NonequilibriumEntry.DIMENSIONLESS));
             all.append(SetCommand.create(domain, c, P.getContaminant_Beta(), fit.parameter("beta").value()));
             all.append(SetCommand.create(domain, c, P.getContaminant_Omega(), fit.parameter("omega").value()));
         }
-        return all;
+        return new Acceptance(all, note);
     }
 }

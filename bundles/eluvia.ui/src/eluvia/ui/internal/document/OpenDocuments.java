@@ -51,9 +51,12 @@ public final class OpenDocuments {
         navigators.remove(document);
         results.remove(document);
         if (active == document) {
-            active = null;
+            // the last one opened of those left becomes active; none left is news too (views clear)
             List<ProjectDocument> left = new ArrayList<>(navigators.keySet());
-            activate(left.isEmpty() ? null : left.get(left.size() - 1));
+            active = left.isEmpty() ? null : left.get(left.size() - 1);
+            for (Listener l : listeners) {
+                l.activeChanged(active);
+            }
         }
     }
 

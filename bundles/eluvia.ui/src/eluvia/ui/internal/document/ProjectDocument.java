@@ -19,6 +19,7 @@ import org.eclipse.emf.edit.provider.ComposedAdapterFactory;
 import org.eclipse.emf.edit.provider.ReflectiveItemProviderAdapterFactory;
 import org.eclipse.emf.edit.provider.resource.ResourceItemProviderAdapterFactory;
 
+import eluvia.site.edit.command.SiteEditingDomain;
 import eluvia.site.edit.provider.SiteItemProviderAdapterFactory;
 import eluvia.site.files.ProjectFileException;
 import eluvia.site.files.ProjectFiles;
@@ -68,7 +69,8 @@ public final class ProjectDocument {
                 new ResourceItemProviderAdapterFactory(), new SiteItemProviderAdapterFactory(),
                 new ReflectiveItemProviderAdapterFactory() });
         commandStack = new BasicCommandStack();
-        domain = new AdapterFactoryEditingDomain(adapterFactory, commandStack);
+        // its commands say what they change: the Undo and Redo menu items name them
+        domain = new SiteEditingDomain(adapterFactory, commandStack);
         domain.getResourceSet().getResourceFactoryRegistry().getExtensionToFactoryMap()
                 .put(Resource.Factory.Registry.DEFAULT_EXTENSION, new XMIResourceFactoryImpl());
         // The project lives in a resource of the domain's resource set so that DeleteCommand finds

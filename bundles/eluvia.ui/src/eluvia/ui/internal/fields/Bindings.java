@@ -26,6 +26,7 @@ import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Text;
 
+import eluvia.site.edit.command.SiteEditingDomain;
 import eluvia.ui.internal.Messages;
 import eluvia.ui.internal.document.ProjectDocument;
 
@@ -141,7 +142,7 @@ public final class Bindings {
             markGood(text, decoration);
             double current = ((Number) owner.eGet(attribute)).doubleValue();
             if (!Numbers.same(stored, current)) {
-                apply(state, owner, attribute, value);
+                apply(state, owner, attribute, value, label);
             }
         });
         follow(text, owner, attribute, state, () -> {
@@ -213,7 +214,7 @@ public final class Bindings {
             }
             markGood(text, decoration);
             if (!sameList(stored, (List<?>) owner.eGet(attribute))) {
-                apply(state, owner, attribute, stored);
+                apply(state, owner, attribute, stored, label);
             }
         });
         follow(text, owner, attribute, state, () -> {
@@ -273,7 +274,7 @@ public final class Bindings {
         show.run();
         text.addModifyListener(e -> {
             if (!state.updating && !Objects.equals(text.getText(), nullToEmpty(owner.eGet(attribute)))) {
-                apply(state, owner, attribute, text.getText());
+                apply(state, owner, attribute, text.getText(), label);
             }
         });
         follow(text, owner, attribute, state, () -> {
@@ -297,7 +298,7 @@ public final class Bindings {
         b.addListener(SWT.Selection, e -> {
             if (b.getSelection() != Boolean.TRUE.equals(owner.eGet(attribute))) {
                 state.session = null;
-                apply(state, owner, attribute, b.getSelection());
+                apply(state, owner, attribute, b.getSelection(), label);
             }
         });
         follow(b, owner, attribute, state, () -> b.setSelection(Boolean.TRUE.equals(owner.eGet(attribute))));
@@ -336,7 +337,7 @@ public final class Bindings {
             int i = combo.getSelectionIndex();
             if (!state.updating && i >= 0 && choices.get(i) != owner.eGet(feature)) {
                 state.session = null;
-                apply(state, owner, feature, choices.get(i));
+                apply(state, owner, feature, choices.get(i), label);
             }
         });
         follow(combo, owner, feature, state, show);
@@ -357,13 +358,24 @@ public final class Bindings {
         return document.execute(command);
     }
 
-    private void apply(FieldState state, EObject owner, EStructuralFeature feature, Object value) {
+    /**
+     * The undoable command that sets a feature, labelled with the field it was typed in (what
+     * Edit > Undo names), e.g. "Set Darcy flux (m/d)".
+     *
+     * @param fieldLabel the field's label as shown, with its unit
+     */
+    public Command set(EObject owner, EStructuralFeature feature, Object value, String fieldLabel) {
+        return SiteEditingDomain.labelled(Messages.bind(Messages.Edit_setField, fieldLabel),
+                SetCommand.create(document.domain(), owner, feature, value));
+    }
+
+    private void apply(FieldState state, EObject owner, EStructuralFeature feature, Object value, String fieldLabel) {
         state.applying = true;
         try {
             if (state.session != null && document.commandStack().getUndoCommand() == state.session) {
                 document.undo();
             }
-            Command c = SetCommand.create(document.domain(), owner, feature, value);
+            Command c = set(owner, feature, value, fieldLabel);
             state.session = document.execute(c) ? c : null;
         } finally {
             state.applying = false;

@@ -10,7 +10,6 @@ import org.eclipse.emf.common.notify.Notification;
 import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.EStructuralFeature;
-import org.eclipse.emf.edit.command.SetCommand;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.CellEditor;
 import org.eclipse.jface.viewers.CheckboxCellEditor;
@@ -139,7 +138,7 @@ public final class ObjectTable<T extends EObject> {
                 }
                 bindings.messages().set(ObjectTable.this, null);
                 if (!Numbers.same(stored, ((Number) row.eGet(attribute)).doubleValue())) {
-                    bindings.execute(SetCommand.create(bindings.document().domain(), row, attribute, modelValue));
+                    bindings.execute(bindings.set(row, attribute, modelValue, where));
                 }
             }
         });
@@ -172,7 +171,7 @@ public final class ObjectTable<T extends EObject> {
                 T row = cast(element);
                 String v = Objects.toString(value, "");
                 if (!v.equals(Objects.toString(row.eGet(attribute), ""))) {
-                    bindings.execute(SetCommand.create(bindings.document().domain(), row, attribute, v));
+                    bindings.execute(bindings.set(row, attribute, v, Messages.bind(Messages.Fields_tableCell, header, rowNumber(row))));
                 }
             }
         });
@@ -204,7 +203,7 @@ public final class ObjectTable<T extends EObject> {
             protected void setValue(Object element, Object value) {
                 T row = cast(element);
                 if (!Objects.equals(value, row.eGet(attribute))) {
-                    bindings.execute(SetCommand.create(bindings.document().domain(), row, attribute, value));
+                    bindings.execute(bindings.set(row, attribute, value, Messages.bind(Messages.Fields_tableCell, header, rowNumber(row))));
                 }
             }
         });
@@ -246,7 +245,7 @@ public final class ObjectTable<T extends EObject> {
                 int i = value instanceof Integer n ? n : -1;
                 T row = cast(element);
                 if (i >= 0 && i < offered.size() && offered.get(i) != row.eGet(feature)) {
-                    bindings.execute(SetCommand.create(bindings.document().domain(), row, feature, offered.get(i)));
+                    bindings.execute(bindings.set(row, feature, offered.get(i), Messages.bind(Messages.Fields_tableCell, header, rowNumber(row))));
                 }
             }
         });

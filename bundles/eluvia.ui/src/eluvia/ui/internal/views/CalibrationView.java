@@ -7,7 +7,6 @@ import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.Job;
-import org.eclipse.emf.common.command.Command;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
@@ -264,9 +263,11 @@ public final class CalibrationView extends DocumentView {
             return false;
         }
         try {
-            Command c = Calibration.accept(document.domain(), fitted, result);
-            boolean done = c != null && document.execute(c);
-            status.setText(done ? Messages.Calibration_accepted : Messages.Calibration_noContaminant);
+            Calibration.Acceptance a = Calibration.accept(document.domain(), fitted, result);
+            boolean done = a != null && document.execute(a.command());
+            status.setText(!done ? Messages.Calibration_noContaminant
+                    : a.dispersivityNote() == null ? Messages.Calibration_accepted
+                    : Messages.Calibration_accepted + " " + a.dispersivityNote());
             return done;
         } catch (RuntimeException e) {
             status.setText(e.getMessage());

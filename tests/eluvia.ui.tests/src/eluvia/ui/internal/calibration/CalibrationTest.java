@@ -2,13 +2,19 @@ package eluvia.ui.internal.calibration;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
+import java.util.List;
 
 import org.apache.commons.math3.special.Erf;
+import org.eclipse.emf.common.command.BasicCommandStack;
 import org.eclipse.emf.edit.command.AddCommand;
+import org.eclipse.emf.edit.domain.AdapterFactoryEditingDomain;
+import org.eclipse.emf.edit.domain.EditingDomain;
+import org.eclipse.emf.edit.provider.ComposedAdapterFactory;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
 import org.junit.jupiter.api.Test;
@@ -45,19 +51,76 @@ final class CalibrationTest {
                 + 0.5 * Math.exp(peclet) * Erf.erfc((retardation + poreVolumes) / s);
     }
 
+    /** A fit with the given R and P, as the fitter reports it. */
+    private static ColumnFitResult fitted(double retardation, double peclet) {
+        return new ColumnFitResult(ColumnTestFit.Curve.BREAKTHROUGH, ColumnTestFit.Model.SEMI_INFINITE_EQUILIBRIUM,
+                List.of(new ColumnFitResult.FittedParameter("R", retardation, 0.01, retardation - 0.02, retardation + 0.02, true),
+                        new ColumnFitResult.FittedParameter("P", peclet, 0.1, peclet - 0.2, peclet + 0.2, true)),
+                List.of(), 0, 10, 20, List.of());
+    }
+
+    /** A column of 0.3 m, q = 0.5 m/d, theta = 0.35, rho_b = 1600 kg/m3, of a contaminant with D0 and a layer. */
+    private static ColumnTest column(double diffusionSquareMetresPerSecond) {
+        Contaminant c = SiteFactory.eINSTANCE.createContaminant();
+        c.setName("Contaminant (test)");
+        c.setDiffusionSquareMetresPerSecond(diffusionSquareMetresPerSecond);
+        SoilLayer layer = SiteFactory.eINSTANCE.createSoilLayer();
+        layer.setName("Layer (test)");
+        layer.setDispersivityMetres(0.5);
+        ColumnTest t = SiteFactory.eINSTANCE.createColumnTest();
+        t.setName("Column (test)");
+        t.setContaminant(c);
+        t.setLayer(layer);
+        t.setColumnLengthMetres(0.3);
+        t.setDarcyFluxMetresPerDay(0.5);
+        t.setWaterContent(0.35);
+        t.setBulkDensityKgPerCubicMetre(1600);
+        return t;
+    }
+
     @Test
-    void kdAndDispersivityAreReadBackFromTheFittedNumbers() {
-        // REFERENCES.md [COMP] retardation check: rho_b = 1.6 kg/L, theta = 0.3, Kd = Koc foc = 59 x 0.002 = 0.118 L/kg
-        double r = TransportProperties.retardation(1600, 0.118, 0.3);
-        assertEquals(1.6293, r, 5e-5);
-        assertEquals(0.118, Calibration.kdLitresPerKg(r, 0.3, 1600), 1e-12);
-        // P = v L / D with D = alpha_L v (REFERENCES.md): alpha_L = L / P
-        assertEquals(0.015, Calibration.dispersivityMetres(20, 0.3), 1e-15);
-        assertThrows(IllegalArgumentException.class, () -> Calibration.kdLitresPerKg(0.5, 0.3, 1600));
-        assertThrows(IllegalArgumentException.class, () -> Calibration.kdLitresPerKg(2, 1.2, 1600));
-        assertThrows(IllegalArgumentException.class, () -> Calibration.kdLitresPerKg(2, 0.3, 0));
-        assertThrows(IllegalArgumentException.class, () -> Calibration.dispersivityMetres(0, 0.3));
-        assertThrows(IllegalArgumentException.class, () -> Calibration.dispersivityMetres(10, -1));
+    void theReadBackUsesTheColumnsConditionsAndSaysWhatItCannotDetermine() {
+        EditingDomain domain = new AdapterFactoryEditingDomain(
+                new ComposedAdapterFactory(ComposedAdapterFactory.Descriptor.Registry.INSTANCE), new BasicCommandStack());
+        ColumnTest t = column(1e-9);
+        Calibration.Acceptance a = Calibration.accept(domain, t, fitted(2.0, 20));
+        assertNull(a.dispersivityNote());
+        a.command().execute();
+        // Kd = (R - 1) theta / rho_b = 1 x 0.35 / 1.6 = 0.21875 L/kg, by hand (REFERENCES.md: R = 1 + rho_b Kd / theta)
+        assertEquals(0.21875, t.getContaminant().getKdLitresPerKg(), 1e-15);
+        assertTrue(t.getContaminant().isKdEntered());
+        // D = v L / P and D = alpha_L v + tau D0 (REFERENCES.md), v = q / theta, tau = theta^(7/3) / n^2 with n = theta
+        // (saturated column): alpha_L = (v L / P - tau D0) / v, evaluated here
+        double v = 0.5 / 0.35;
+        double tau = Math.pow(0.35, 7.0 / 3) / (0.35 * 0.35);
+        assertEquals((v * 0.3 / 20 - tau * 1e-9 * 86400) / v, t.getLayer().getDispersivityMetres(), 1e-15);
+        assertEquals(DispersivityRule.ENTERED, t.getLayer().getDispersivityRule());
+
+        // A diffusion coefficient of 1e-6 m2/s (invented: a thousand times a small solute's) spreads more than P = 20 says:
+        // v L / (tau D0) = 1.42857 x 0.3 / (0.704730 x 1e-6 x 86400) = 0.428571 / 0.0608887 = 7.039 (by hand) is below 20.
+        ColumnTest slow = column(1e-6);
+        a = Calibration.accept(domain, slow, fitted(2.0, 20));
+        assertNotNull(a.dispersivityNote());
+        assertTrue(a.dispersivityNote().contains("Layer (test)") && a.dispersivityNote().contains("7.039")
+                && a.dispersivityNote().contains("left as it was"), a.dispersivityNote());
+        a.command().execute();
+        assertEquals(0.5, slow.getLayer().getDispersivityMetres(), "the layer's dispersivity is kept");
+        assertEquals(0.21875, slow.getContaminant().getKdLitresPerKg(), 1e-15, "Kd is still taken in");
+
+        // bad column conditions: the message names the quantity, its value, the range and where to correct it
+        ColumnTest noFlow = column(1e-9);
+        noFlow.setDarcyFluxMetresPerDay(0);
+        String m = assertThrows(IllegalArgumentException.class, () -> Calibration.accept(domain, noFlow, fitted(2.0, 20)))
+                .getMessage();
+        assertTrue(m.contains("Darcy flux (m/day) = 0.0") && m.contains("greater than 0") && m.contains("Column tests page")
+                && m.contains("Column (test)"), m);
+        ColumnTest wet = column(1e-9);
+        wet.setWaterContent(35);
+        m = assertThrows(IllegalArgumentException.class, () -> Calibration.accept(domain, wet, fitted(2.0, 20))).getMessage();
+        assertTrue(m.contains("water content (-) = 35.0") && m.contains("between 0.0 and 1.0"), m);
+        m = assertThrows(IllegalArgumentException.class, () -> Calibration.accept(domain, column(1e-9), fitted(0.5, 20)))
+                .getMessage();
+        assertTrue(m.contains("retardation factor (-) = 0.5"), m);
     }
 
     @Test
@@ -117,7 +180,12 @@ final class CalibrationTest {
             // R = 1 + rho_b Kd / theta with the column's rho_b and theta (REFERENCES.md), through the transport formula
             assertEquals(fit.parameter("R").value(), TransportProperties.retardation(1600, c.getKdLitresPerKg(), 0.35), 1e-12);
             assertTrue(c.isKdEntered());
-            assertEquals(0.3 / fit.parameter("P").value(), layer.getDispersivityMetres(), 1e-15);
+            // D = v L / P = alpha_L v + tau D0 (REFERENCES.md) with the column's v = q / theta and tau of a saturated
+            // column (Millington and Quirk, n = theta), evaluated here: alpha_L = (v L / P - tau D0) / v
+            double v = 0.5 / 0.35;
+            double tau = Math.pow(0.35, 7.0 / 3) / (0.35 * 0.35);
+            double d0 = c.getDiffusionSquareMetresPerSecond() * 86400;
+            assertEquals((v * 0.3 / fit.parameter("P").value() - tau * d0) / v, layer.getDispersivityMetres(), 1e-15);
             assertEquals(DispersivityRule.ENTERED, layer.getDispersivityRule());
             f.document.undo();
             assertEquals(kdBefore, c.getKdLitresPerKg());

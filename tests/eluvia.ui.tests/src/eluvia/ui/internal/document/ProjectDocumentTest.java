@@ -42,6 +42,38 @@ final class ProjectDocumentTest {
     }
 
     @Test
+    void editsSayWhatTheyChangeForTheUndoAndRedoItems() throws Exception {
+        ProjectDocument d = ProjectDocument.open(example());
+        FlushingDesign design = d.project().getFlushingDesigns().get(0);
+        assertEquals("", d.undoLabel(), "nothing to undo");
+        d.execute(SetCommand.create(d.domain(), design, P.getFlushingDesign_DarcyFluxMetresPerDay(), 0.5));
+        // the item providers' property name (eluvia.site.edit plugin.properties)
+        assertEquals("Set Darcy Flux Metres Per Day", d.undoLabel());
+        d.undo();
+        assertEquals("", d.undoLabel());
+        assertEquals("Set Darcy Flux Metres Per Day", d.redoLabel());
+        d.dispose();
+    }
+
+    @Test
+    void closingTheLastDocumentTellsTheViewsThatNoneIsActive() throws Exception {
+        OpenDocuments documents = new OpenDocuments();
+        ProjectDocument d = ProjectDocument.open(example());
+        List<ProjectDocument> told = new java.util.ArrayList<>();
+        documents.addListener(new OpenDocuments.Listener() {
+            @Override
+            public void activeChanged(ProjectDocument activeOrNull) {
+                told.add(activeOrNull);
+            }
+        });
+        documents.register(d, (object, feature) -> false);
+        documents.unregister(d);
+        assertNull(documents.active());
+        assertEquals(java.util.Arrays.asList(d, null), told, "active, then none");
+        d.dispose();
+    }
+
+    @Test
     void anEditIsUndoneAndRedoneAndMarksTheDocumentDirtyUntilSaved() throws Exception {
         ProjectDocument d = ProjectDocument.open(example());
         FlushingDesign design = d.project().getFlushingDesigns().get(0);
