@@ -58,6 +58,22 @@ final class ModalFlushingSolutionTest {
     }
 
     @Test
+    void richardsonExtrapolationInSpaceGainsAnOrder() {
+        // reference: exact finite-layer series (Brenner 1962); coarse 8 cells, fine 16, P = 10
+        double exact = exactPoreVolumes(10, 0.01);
+        ExtrapolatedTarget x = ModalFlushingSolution.extrapolatedPoreVolumesToTarget(column(10), cells(8),
+                CleanupCriterion.EFFLUENT, 0.01, 1000);
+        assertTrue(x.reached());
+        double fineError = Math.abs(x.finePoreVolumes() / exact - 1);
+        double extrapolatedError = Math.abs(x.poreVolumes() / exact - 1);
+        assertTrue(extrapolatedError < fineError / 5, "fine " + fineError + ", extrapolated " + extrapolatedError);
+        // the error estimate of the fine grid is of the right size (within a factor of 2)
+        double estimate = x.errorEstimatePoreVolumes() / exact;
+        assertTrue(estimate > fineError / 2 && estimate < 2 * fineError, "estimate " + estimate + ", actual " + fineError);
+        assertEquals(8 * 8 + 16 * 16, x.cellSteps());
+    }
+
+    @Test
     void matchesTheMethodOfLinesOnTheSameGrid() {
         // reference: Commons Math 3.6.1 DormandPrince853 on the same finite-volume equations
         // (MethodOfLinesReference, relative tolerance 1e-10); both are exact in time up to their tolerances
