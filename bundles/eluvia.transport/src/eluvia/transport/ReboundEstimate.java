@@ -26,6 +26,12 @@ public record ReboundEstimate(double targetFraction, PoreVolumeResult effluentRe
         double reboundMeanFraction, double reboundMaxFraction, boolean waterMeetsButSoilDoesNot) {
 
     /**
+     * Relative excess of the soil's maximum over the target below which the warning is not given:
+     * the search stops within 1e-10 of the crossing, and an excess of that size is no rebound.
+     */
+    public static final double SOIL_MARGIN = 1e-6;
+
+    /**
      * @param t the layer's transport properties (R, P, decay per pore volume)
      * @param parameters beta and omega
      * @param targetFraction the effluent target, between 0 and 1 (both excluded)
@@ -48,7 +54,7 @@ public record ReboundEstimate(double targetFraction, PoreVolumeResult effluentRe
         double outlet = profile.total(1) * decay;
         double mean = s.meanTotal(eff.poreVolumes()) * decay;
         double max = ProfileMaximum.of(profile::total).value() * decay;
-        return new ReboundEstimate(targetFraction, eff, outlet, mean, max, max > targetFraction);
+        return new ReboundEstimate(targetFraction, eff, outlet, mean, max, max > targetFraction * (1 + SOIL_MARGIN));
     }
 
     /** Plain words for a report. */

@@ -80,7 +80,7 @@ public final class FiniteLayerSolution {
     static final int CONTINUED_FRACTION_TERMS = 40;
 
     /** Roots computed at first use (more are added as a series needs them). */
-    private static final int FIRST_ROOTS = 16;
+    private static final int FIRST_ROOTS = 4;
 
     private final double peclet;
     private volatile Roots roots = new Roots(new double[0], new double[0], new double[0], new double[0]);
@@ -255,7 +255,9 @@ public final class FiniteLayerSolution {
     /**
      * The m-th root by Newton's method on g(b) = b - (m-1) pi - atan2(1, q(b)), q(b) = b/P - P/(4 b):
      * g rises (g' = 1 + q'/(1 + q^2) &ge; 1, q' = 1/P + P/(4 b^2)) from -pi or less at (m-1) pi to
-     * 0 or more at m pi; a step that leaves the bracket is replaced by bisection.
+     * 0 or more at m pi; a step that leaves the bracket is replaced by bisection. It stops when the
+     * Newton step is within 4 units in the last place of b (quadratic convergence has then reached
+     * rounding; typically after 3 to 5 steps).
      */
     static double newtonRoot(int m, double p) {
         double start = (m - 1) * Math.PI;
@@ -275,11 +277,16 @@ public final class FiniteLayerSolution {
                 hi = x;
             }
             double slope = 1 + (1 / p + p / (4 * x * x)) / (1 + q * q);
-            double next = x - g / slope;
+            double step = g / slope;
+            if (Math.abs(step) <= 4 * Math.ulp(x)) {
+                // converged to rounding: a step this small cannot be told from the noise of g
+                return x - step;
+            }
+            double next = x - step;
             if (!(next > lo && next < hi)) {
                 next = lo + (hi - lo) / 2;
             }
-            if (Math.abs(next - x) <= 2e-16 * x || next == lo || next == hi) {
+            if (next == lo || next == hi) {
                 return next;
             }
             x = next;

@@ -404,6 +404,29 @@ public final class NumericalFlushingSolver {
         return out;
     }
 
+    /**
+     * The semi-discrete equations of a column with linear equilibrium sorption only (no immobile
+     * region, no Freundlich or Langmuir layer), for {@link ModalFlushingSolution}; null otherwise.
+     * The arrays are the solver's own: read them, never change them.
+     */
+    SemiDiscreteSystem linearEquilibriumSystem() {
+        if (!allLinear || anyImmobile) {
+            return null;
+        }
+        return new SemiDiscreteSystem(n, capM, decM, lo, dg, up, src0, dz, depth, rhoB, initialC, initialMaxC);
+    }
+
+    /**
+     * Per cell (length n): storage capM (dimensionless, theta + rho_b Kd), decay decM (1/day), the
+     * tridiagonal transport operator lo, dg, up (1/day per unit cell length; the stored amount
+     * changes as dm_i/dt = -(lo_i c_(i-1) + dg_i c_i + up_i c_(i+1)) - decM_i c_i, plus
+     * inflowSource (mg/L per day) in the first cell), cell sizes dz (m), centre depths (m), bulk
+     * densities rhoB (kg/L), initial pore water (mg/L) and its largest value.
+     */
+    record SemiDiscreteSystem(int n, double[] capM, double[] decM, double[] lo, double[] dg, double[] up,
+            double inflowSource, double[] dz, double[] depth, double[] rhoB, double[] initialC, double initialMaxC) {
+    }
+
     /** The column this solver was built for. */
     public FlushingColumn column() {
         return column;

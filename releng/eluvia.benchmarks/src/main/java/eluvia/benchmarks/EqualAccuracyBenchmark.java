@@ -1,5 +1,6 @@
 package eluvia.benchmarks;
 
+import java.util.Locale;
 import java.util.concurrent.TimeUnit;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
@@ -20,18 +21,29 @@ import eluvia.transport.internal.FiniteLayerModel;
 import eluvia.transport.numerical.ExtrapolatedTargetSearch;
 import eluvia.transport.numerical.FlushingColumn;
 import eluvia.transport.numerical.FlushingRunRequest;
+import eluvia.transport.numerical.ModalFlushingSolution;
 import eluvia.transport.numerical.NumericalFlushingSolver;
 import eluvia.transport.numerical.SolverSettings;
 import eluvia.transport.numerical.SorptionIsotherm;
 
 /**
- * The implicit solver against the method-of-lines baseline ({@link MethodOfLinesFlushing},
- * Commons Math 3.6.1 DormandPrince853Integrator) on the same case at equal accuracy: pore
- * volumes until the effluent falls to 1 % of the initial concentration, R = 2, in the invented
- * 1 m layer of {@link Cases}. For each case both methods use the cheapest settings found that
- * stay within the stated relative error of the exact finite-layer series (Brenner 1962, the
- * analytic part of the transport bundle); the setup computes both errors in the same run, prints
- * them and refuses to run if either exceeds the accuracy.
+ * The transport bundle's numerical solvers against the method-of-lines baseline
+ * ({@link MethodOfLinesFlushing}, Commons Math 3.6.1 DormandPrince853Integrator) on the same
+ * case at equal accuracy: pore volumes until the effluent falls to 1 % of the initial
+ * concentration, R = 2, in the invented 1 m layer of {@link Cases}.
+ *
+ * <p>Each parameter names a case (layer Peclet number and accuracy), a method and its
+ * settings, the cheapest robust ones found by {@link EqualAccuracyScan}:
+ * <ul>
+ * <li>{@code mol N TOL}: method of lines, N cells, integrator relative tolerance TOL;</li>
+ * <li>{@code bdf2 N H}: implicit solver, N cells, fixed steps of H pore volumes;</li>
+ * <li>{@code bdf2x N H}: implicit solver with Richardson extrapolation, N and 2N cells, steps H and H/2;</li>
+ * <li>{@code modal N}: modal solution (exact in time), N cells;</li>
+ * <li>{@code modalx N}: modal solution with Richardson extrapolation in space, N and 2N cells.</li>
+ * </ul>
+ * The setup computes the error of the setting and of its refinement (the scan's rule) against
+ * the exact finite-layer series (Brenner 1962) in the same run, prints both and refuses to run
+ * when either exceeds the accuracy.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -44,101 +56,100 @@ public class EqualAccuracyBenchmark {
     private static final double TARGET = 0.01;
     private static final double MAX_PORE_VOLUMES = 1000;
 
-    /**
-     * Layer Peclet number and accuracy. The settings of each case are the cheapest found by
-     * scanning cell counts with, for the implicit solver, fixed steps of 0.01 to 0.08 pore
-     * volumes, adaptive tolerances 1e-3 to 1e-5 and Richardson extrapolation, and for the
-     * baseline relative tolerances 1e-3 to 1e-5:
-     * <ul>
-     * <li>P10-1e-3: implicit 24 cells, fixed steps of 0.02 pore volumes; baseline 14 cells, rel. tol. 1e-3;</li>
-     * <li>P1-1e-3: implicit 12 cells, fixed steps of 0.05; baseline 14 cells, rel. tol. 1e-4;</li>
-     * <li>P10-3e-5: implicit Richardson-extrapolated, 16 and 32 cells, steps 0.04 and 0.02;
-     * baseline 100 cells, rel. tol. 1e-4;</li>
-     * <li>P1-3e-5: implicit Richardson-extrapolated, 8 and 16 cells, steps 0.08 and 0.04;
-     * baseline 50 cells, rel. tol. 1e-3.</li>
-     * </ul>
-     */
-    @Param({ "P10-1e-3", "P1-1e-3", "P10-3e-5", "P1-3e-5" })
-    public String caseName;
+    @Param({ "P10-1e-3 mol 18 1e-3", "P10-1e-3 bdf2 40 0.04", "P10-1e-3 bdf2x 10 0.16", "P10-1e-3 modal 18",
+        "P10-1e-3 modalx 8",
+        "P1-1e-3 mol 12 1e-2", "P1-1e-3 bdf2 28 0.08", "P1-1e-3 bdf2 16 0.08", "P1-1e-3 modal 12", "P1-1e-3 modalx 6",
+        "P10-3e-5 mol 128 1e-4", "P10-3e-5 bdf2x 18 0.04", "P10-3e-5 modalx 12",
+        "P1-3e-5 mol 56 1e-2", "P1-3e-5 bdf2x 10 0.16", "P1-3e-5 bdf2x 6 0.16", "P1-3e-5 modalx 6" })
+    public String setting;
 
-    private double peclet;
-    private int implicitCells;
-    private double implicitStepPoreVolumes;
-    private boolean extrapolate;
-    private int baselineCells;
-    private double baselineTolerance;
+    private String method;
+    private int cells;
+    private double control;
     private FlushingColumn column;
+    private SolverSettings grid;
     private NumericalFlushingSolver solver;
-    private SolverSettings settings;
     private FlushingRunRequest request;
     private MethodOfLinesFlushing baseline;
     private double daysPerPoreVolume;
 
-    private void define(double pecletNumber, int cells, double step, boolean richardson, int molCells, double molTol) {
-        peclet = pecletNumber;
-        implicitCells = cells;
-        implicitStepPoreVolumes = step;
-        extrapolate = richardson;
-        baselineCells = molCells;
-        baselineTolerance = molTol;
-    }
-
     @Setup
     public void setUp() {
-        double accuracy;
-        switch (caseName) {
-            case "P10-1e-3" -> {
-                define(10, 24, 0.02, false, 14, 1e-3);
-                accuracy = 1e-3;
-            }
-            case "P1-1e-3" -> {
-                define(1, 12, 0.05, false, 14, 1e-4);
-                accuracy = 1e-3;
-            }
-            case "P10-3e-5" -> {
-                define(10, 16, 0.04, true, 100, 1e-4);
-                accuracy = 3e-5;
-            }
-            case "P1-3e-5" -> {
-                define(1, 8, 0.08, true, 50, 1e-3);
-                accuracy = 3e-5;
-            }
-            default -> throw new IllegalArgumentException(caseName);
-        }
+        String[] parts = setting.split(" ");
+        String[] caseParts = parts[0].substring(1).split("-", 2);
+        double peclet = Double.parseDouble(caseParts[0]);
+        double accuracy = Double.parseDouble(caseParts[1]);
+        method = parts[1];
+        cells = Integer.parseInt(parts[2]);
+        control = parts.length > 3 ? Double.parseDouble(parts[3]) : Double.NaN;
         column = Cases.column(Cases.layer(1 / peclet, SorptionIsotherm.linear(Cases.kdForRetardation(RETARDATION))), 1);
-        SolverSettings.Builder b = SolverSettings.builder().minimumCellsPerLayer(implicitCells).maximumCellPeclet(2);
-        settings = extrapolate ? b.build() : b.fixedStepPoreVolumes(implicitStepPoreVolumes).build();
-        solver = new NumericalFlushingSolver(column, settings);
+        grid = SolverSettings.builder().minimumCellsPerLayer(cells).maximumCellPeclet(2).build();
         request = FlushingRunRequest.upToPoreVolumes(MAX_PORE_VOLUMES).target(CleanupCriterion.EFFLUENT, TARGET).build();
-        baseline = new MethodOfLinesFlushing(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
-                Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, baselineCells);
         daysPerPoreVolume = Cases.WATER_CONTENT * Cases.THICKNESS_METRES / Cases.DARCY_FLUX_METRES_PER_DAY;
+        baseline = new MethodOfLinesFlushing(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
+                Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, cells);
+        if (method.equals("bdf2")) {
+            solver = new NumericalFlushingSolver(column, grid.toBuilder().fixedStepPoreVolumes(control).build());
+        }
 
         FiniteLayerModel exact = new FiniteLayerModel(RETARDATION, peclet, 0);
         double expected = new BrentSolver(1e-14, 1e-14).solve(10_000,
                 t -> exact.remainingFraction(CleanupCriterion.EFFLUENT, t) - TARGET, 1e-3, MAX_PORE_VOLUMES);
-        double implicitError = implicit() / expected - 1;
-        double baselineError = methodOfLines() / expected - 1;
-        System.out.printf("%n[accuracy %s] exact %.8f pore volumes; implicit relative error %.2e; "
-                + "method of lines relative error %.2e; allowed %.1e%n", caseName, expected, implicitError, baselineError,
-                accuracy);
-        if (Math.abs(implicitError) > accuracy || Math.abs(baselineError) > accuracy) {
-            throw new IllegalStateException("case " + caseName + " is not at the stated accuracy " + accuracy);
+        double error = solve() / expected - 1;
+        double refined = refined() / expected - 1;
+        System.out.printf(Locale.ROOT, "%n[%s] exact %.8f pore volumes; relative error %+.2e, refined %+.2e; allowed %.1e%n",
+                setting, expected, error, refined, accuracy);
+        if (Math.abs(error) > accuracy || Math.abs(refined) > accuracy) {
+            throw new IllegalStateException("setting " + setting + " is not robustly at the accuracy " + accuracy);
+        }
+    }
+
+    /** The same method with its accuracy control refined (the scan's rule). */
+    private double refined() {
+        switch (method) {
+            case "mol":
+                return baseline.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, control / 10)
+                        / daysPerPoreVolume;
+            case "bdf2":
+                return new NumericalFlushingSolver(column, grid.toBuilder().fixedStepPoreVolumes(control / 2).build())
+                        .run(request).outcome(CleanupCriterion.EFFLUENT).poreVolumes();
+            case "bdf2x":
+                return ExtrapolatedTargetSearch.poreVolumesToTarget(column, grid, control / 2, CleanupCriterion.EFFLUENT,
+                        TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            case "modal":
+            case "modalx": {
+                SolverSettings finer = SolverSettings.builder().minimumCellsPerLayer(EqualAccuracyScan.nextGrid(cells))
+                        .maximumCellPeclet(2).build();
+                return method.equals("modal")
+                        ? ModalFlushingSolution.of(column, finer)
+                                .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes()
+                        : ModalFlushingSolution.extrapolatedPoreVolumesToTarget(column, finer, CleanupCriterion.EFFLUENT,
+                                TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            }
+            default:
+                throw new IllegalArgumentException(setting);
         }
     }
 
     @Benchmark
-    public double implicit() {
-        if (extrapolate) {
-            return ExtrapolatedTargetSearch.poreVolumesToTarget(column, settings, implicitStepPoreVolumes,
-                    CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
+    public double solve() {
+        switch (method) {
+            case "mol":
+                return baseline.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, control)
+                        / daysPerPoreVolume;
+            case "bdf2":
+                return solver.run(request).outcome(CleanupCriterion.EFFLUENT).poreVolumes();
+            case "bdf2x":
+                return ExtrapolatedTargetSearch.poreVolumesToTarget(column, grid, control, CleanupCriterion.EFFLUENT,
+                        TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            case "modal":
+                return ModalFlushingSolution.of(column, grid)
+                        .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            case "modalx":
+                return ModalFlushingSolution.extrapolatedPoreVolumesToTarget(column, grid, CleanupCriterion.EFFLUENT,
+                        TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            default:
+                throw new IllegalArgumentException(setting);
         }
-        return solver.run(request).outcome(CleanupCriterion.EFFLUENT).poreVolumes();
-    }
-
-    @Benchmark
-    public double methodOfLines() {
-        return baseline.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, baselineTolerance)
-                / daysPerPoreVolume;
     }
 }

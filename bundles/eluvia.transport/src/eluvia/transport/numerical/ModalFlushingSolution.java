@@ -1,0 +1,401 @@
+package eluvia.transport.numerical;
+
+import java.util.Arrays;
+
+import eluvia.transport.CleanupCriterion;
+import eluvia.transport.FlushingModel;
+import eluvia.transport.PoreVolumeResult;
+import eluvia.transport.PoreVolumeSearch;
+import eluvia.transport.TransportInputException;
+import eluvia.transport.internal.SymmetricTridiagonalEigen;
+
+/**
+ * The finite-volume equations of {@link NumericalFlushingSolver} solved exactly in time, for a
+ * column whose layers all have linear equilibrium sorption (any number of layers, first-order
+ * decay, clean or contaminated inflow): no time steps, so no time-stepping error, and the
+ * effluent, mean and maximum residual at any pore volume from one decomposition.
+ *
+ * <p><b>Method.</b> In space the grid and operator are the implicit solver's own (same cells,
+ * conductances, advection scheme, flux inlet and zero-gradient outlet), so both solve the same
+ * semi-discrete system C dc/dt = -K c + b (C the storage theta + rho_b Kd per cell, K the
+ * tridiagonal transport and decay operator, b the inflow). Its solution is c(t) = c_s +
+ * exp(-C^-1 K t) (c0 - c_s) with the steady state K c_s = b. Every face couples its two cells
+ * both ways (dispersive conductance above the advective share of the downstream cell), so the
+ * diagonal scaling s_(i+1) = s_i sqrt(K_(i,i+1) C_(i+1) / (K_(i+1,i) C_i)) makes S C^-1 K S^-1
+ * symmetric (the similarity of a tridiagonal matrix with off-diagonal products of one sign,
+ * Wilkinson 1965, The Algebraic Eigenvalue Problem, chapter 5). Its eigenvalues lambda_k (decay
+ * rates of the modes, 1/day) and the projections the three criteria need are found by the
+ * implicit QL method ({@link SymmetricTridiagonalEigen}); each criterion is then a sum of
+ * exponentials, a_k exp(-lambda_k t), the discrete counterpart of the series of Brenner (1962).
+ *
+ * <p><b>Range.</b> The scaling grows or shrinks by the same factor over each face, about
+ * exp(P/2) over a layer of Peclet number P; early-time values lose digits in proportion (as
+ * the Brenner series does). Columns whose scale spread exceeds {@value #MAXIMUM_SCALE_SPREAD}
+ * (P above about 35 in one layer), and columns with a face coupled one way only (pure upwind
+ * advection without dispersion), are refused with a message; the implicit solver handles them.
+ * Nonlinear and two-region columns are refused too.
+ *
+ * <p><b>Use.</b> Immutable and thread-safe; the rows of the eigenvector matrix for the maximum
+ * residual are computed at first use.
+ */
+public final class ModalFlushingSolution implements FlushingModel {
+    /** Largest ratio of the symmetrising scale factors accepted (rounding of early-time values grows with it). */
+    public static final double MAXIMUM_SCALE_SPREAD = 1e8;
+
+    private static final double LOG_SMALLEST = -745;
+
+    private final FlushingColumn column;
+    private final SolverSettings settings;
+    private final NumericalFlushingSolver.SemiDiscreteSystem system;
+    private final int n;
+    private final double daysPerPoreVolume;
+    /** Mode decay rates, 1/day, ascending. */
+    private final double[] rates;
+    /** Per mode (in the order of {@link #rates}): effluent (mg/L) and stored-mass (mg/m2) coefficients. */
+    private final double[] effluentCoefficients;
+    private final double[] massCoefficients;
+    /** Per mode: V^T y0, the initial amplitude in the symmetrised variables. */
+    private final double[] amplitudes;
+    /** Symmetrising scale per cell. */
+    private final double[] scale;
+    /** Steady state per cell (mg/L) and its effluent and stored mass (mg/m2). */
+    private final double[] steady;
+    private final double steadyEffluent;
+    private final double steadyMass;
+    private final double initialMass;
+    private final double initialMaxSoil;
+    /** The symmetrised matrix, kept for the full eigenvector matrix at first use of the maximum. */
+    private final double[] symmetricDiagonal;
+    private final double[] symmetricOffDiagonal;
+    private final int[] order;
+    private volatile double[][] cellCoefficients;
+
+    private ModalFlushingSolution(FlushingColumn column, SolverSettings settings,
+            NumericalFlushingSolver.SemiDiscreteSystem sys) {
+        this.column = column;
+        this.settings = settings;
+        this.system = sys;
+        this.n = sys.n();
+        this.daysPerPoreVolume = column.daysForPoreVolumes(1);
+        double[] cap = sys.capM();
+        double[] lo = sys.lo();
+        double[] up = sys.up();
+        // symmetrising scale, as logarithms first so that a wide spread is refused before it overflows
+        double[] logScale = new double[n];
+        double logMin = 0;
+        double logMax = 0;
+        for (int i = 0; i + 1 < n; i++) {
+            double right = up[i] / cap[i]; // T(i, i+1)
+            double left = lo[i + 1] / cap[i + 1]; // T(i+1, i)
+            if (!(right < 0 && left < 0)) {
+                throw new TransportInputException("coupling of cells " + (i + 1) + " and " + (i + 2),
+                        "one way only (advection without enough dispersion)",
+                        "both ways for the modal solution: use the implicit solver (NumericalFlushingSolver)");
+            }
+            logScale[i + 1] = logScale[i] + 0.5 * (Math.log(-right) - Math.log(-left));
+            logMin = Math.min(logMin, logScale[i + 1]);
+            logMax = Math.max(logMax, logScale[i + 1]);
+        }
+        if (logMax - logMin > Math.log(MAXIMUM_SCALE_SPREAD)) {
+            throw new TransportInputException("spread of the modal scale factors (dimensionless)",
+                    Math.exp(logMax - logMin), "at most " + MAXIMUM_SCALE_SPREAD
+                            + " (about P = 35 in a layer); use the implicit solver (NumericalFlushingSolver)");
+        }
+        scale = new double[n];
+        double mid = 0.5 * (logMax + logMin);
+        for (int i = 0; i < n; i++) {
+            scale[i] = Math.exp(logScale[i] - mid);
+        }
+        double[] diag = new double[n];
+        double[] off = new double[Math.max(0, n - 1)];
+        for (int i = 0; i < n; i++) {
+            diag[i] = (sys.dg()[i] + sys.decM()[i]) / cap[i];
+            if (i + 1 < n) {
+                off[i] = -Math.sqrt((up[i] / cap[i]) * (lo[i + 1] / cap[i + 1]));
+            }
+        }
+        symmetricDiagonal = diag.clone();
+        symmetricOffDiagonal = off;
+
+        steady = steadyState(sys);
+        double[] y0 = new double[n];
+        double mass0 = 0;
+        double maxSoil0 = 0;
+        double massSteady = 0;
+        double[] massWeights = new double[n];
+        for (int i = 0; i < n; i++) {
+            y0[i] = scale[i] * (sys.initialC()[i] - steady[i]);
+            double perCell = cap[i] * sys.dz()[i] * LITRES_PER_CUBIC_METRE;
+            massWeights[i] = perCell / scale[i];
+            mass0 += perCell * sys.initialC()[i];
+            massSteady += perCell * steady[i];
+            maxSoil0 = Math.max(maxSoil0, cap[i] * sys.initialC()[i] / sys.rhoB()[i]);
+        }
+        initialMass = mass0;
+        initialMaxSoil = maxSoil0;
+        steadyMass = massSteady;
+        steadyEffluent = steady[n - 1];
+        double[] outlet = new double[n];
+        outlet[n - 1] = 1;
+        double[][] projections = { outlet, y0, massWeights };
+        SymmetricTridiagonalEigen.decompose(diag, off, projections);
+        order = sortedOrder(diag);
+        rates = new double[n];
+        effluentCoefficients = new double[n];
+        massCoefficients = new double[n];
+        amplitudes = new double[n];
+        for (int k = 0; k < n; k++) {
+            int j = order[k];
+            rates[k] = diag[j];
+            amplitudes[k] = y0[j];
+            effluentCoefficients[k] = outlet[j] * y0[j] / scale[n - 1];
+            massCoefficients[k] = massWeights[j] * y0[j];
+        }
+    }
+
+    /** Litres per cubic metre: converts (mg/L) times m to mg/m2. */
+    private static final double LITRES_PER_CUBIC_METRE = 1000.0;
+
+    /** Whether the modal solution can take this column with these settings (see the class comment). */
+    public static boolean applies(FlushingColumn column, SolverSettings settings) {
+        try {
+            of(column, settings);
+            return true;
+        } catch (TransportInputException e) {
+            return false;
+        }
+    }
+
+    /**
+     * @throws TransportInputException for a nonlinear or two-region column, a face coupled one
+     *         way only, or a scale spread above {@value #MAXIMUM_SCALE_SPREAD}, naming which
+     */
+    public static ModalFlushingSolution of(FlushingColumn column, SolverSettings settings) {
+        return of(column, settings, 1);
+    }
+
+    /** As {@link #of(FlushingColumn, SolverSettings)} with every cell split into {@code refinement} cells. */
+    static ModalFlushingSolution of(FlushingColumn column, SolverSettings settings, int refinement) {
+        NumericalFlushingSolver grid = new NumericalFlushingSolver(column, settings, refinement);
+        NumericalFlushingSolver.SemiDiscreteSystem sys = grid.linearEquilibriumSystem();
+        if (sys == null) {
+            throw new TransportInputException("sorption of the column", "nonlinear or two-region",
+                    "linear equilibrium in every layer for the modal solution; use the implicit solver (NumericalFlushingSolver)");
+        }
+        return new ModalFlushingSolution(column, settings, sys);
+    }
+
+    /** Steady state K c = b by the Thomas algorithm (zero when the inflow is clean). */
+    private static double[] steadyState(NumericalFlushingSolver.SemiDiscreteSystem sys) {
+        int n = sys.n();
+        double[] c = new double[n];
+        if (sys.inflowSource() == 0) {
+            return c;
+        }
+        double[] diag = new double[n];
+        double[] rhs = new double[n];
+        for (int i = 0; i < n; i++) {
+            diag[i] = sys.dg()[i] + sys.decM()[i];
+        }
+        rhs[0] = sys.inflowSource();
+        for (int i = 1; i < n; i++) {
+            double w = sys.lo()[i] / diag[i - 1];
+            diag[i] -= w * sys.up()[i - 1];
+            rhs[i] -= w * rhs[i - 1];
+        }
+        c[n - 1] = rhs[n - 1] / diag[n - 1];
+        for (int i = n - 2; i >= 0; i--) {
+            c[i] = (rhs[i] - sys.up()[i] * c[i + 1]) / diag[i];
+        }
+        return c;
+    }
+
+    /** Indices of {@code values} in ascending order of value (insertion sort: n is small, often nearly sorted). */
+    private static int[] sortedOrder(double[] values) {
+        int[] out = new int[values.length];
+        for (int i = 0; i < out.length; i++) {
+            int j = i;
+            while (j > 0 && values[out[j - 1]] > values[i]) {
+                out[j] = out[j - 1];
+                j--;
+            }
+            out[j] = i;
+        }
+        return out;
+    }
+
+    /** The column. */
+    public FlushingColumn column() {
+        return column;
+    }
+
+    /** Cells of the grid (the implicit solver's for the same settings). */
+    public int cellCount() {
+        return n;
+    }
+
+    /** Decay rates of the modes, 1/day, ascending (the slowest first). */
+    public double[] modeRatesPerDay() {
+        return rates.clone();
+    }
+
+    @Override
+    public String name() {
+        return "modal";
+    }
+
+    @Override
+    public String description() {
+        return "finite volumes solved exactly in time by their modes (" + n + " cells, " + column.layers().size()
+                + " layer(s), linear equilibrium sorption)";
+    }
+
+    private static double sum(double[] coefficients, double[] rates, double t) {
+        double s = 0;
+        for (int k = 0; k < coefficients.length; k++) {
+            double exponent = -rates[k] * t;
+            if (exponent < LOG_SMALLEST) {
+                break; // rates ascend: every later term is smaller still
+            }
+            s += coefficients[k] * Math.exp(exponent);
+        }
+        return s;
+    }
+
+    /** Effluent concentration (mg/L) after {@code days} days. */
+    public double effluentMilligramsPerLitre(double days) {
+        TransportInputException.requireNonNegative("time (days)", days);
+        return steadyEffluent + sum(effluentCoefficients, rates, days);
+    }
+
+    /** Solute stored in the column (mg per m2 of plan area) after {@code days} days. */
+    public double storedMilligramsPerSquareMetre(double days) {
+        TransportInputException.requireNonNegative("time (days)", days);
+        return steadyMass + sum(massCoefficients, rates, days);
+    }
+
+    /** Pore-water concentration of every cell (mg/L) after {@code days} days. */
+    public double[] poreWaterMilligramsPerLitre(double days) {
+        TransportInputException.requireNonNegative("time (days)", days);
+        double[][] cc = cellCoefficients();
+        double[] e = new double[n];
+        for (int k = 0; k < n; k++) {
+            double exponent = -rates[k] * days;
+            e[k] = exponent < LOG_SMALLEST ? 0 : Math.exp(exponent);
+        }
+        double[] c = new double[n];
+        for (int i = 0; i < n; i++) {
+            double s = steady[i];
+            double[] row = cc[i];
+            for (int k = 0; k < n; k++) {
+                s += row[k] * e[k];
+            }
+            c[i] = s;
+        }
+        return c;
+    }
+
+    /** Rows of V over the cell scale times the amplitudes: c_i(t) = c_s,i + sum_k row_i[k] exp(-lambda_k t). */
+    private double[][] cellCoefficients() {
+        double[][] cc = cellCoefficients;
+        if (cc != null) {
+            return cc;
+        }
+        synchronized (this) {
+            if (cellCoefficients != null) {
+                return cellCoefficients;
+            }
+            double[][] rows = new double[n][n];
+            for (int i = 0; i < n; i++) {
+                rows[i][i] = 1;
+            }
+            SymmetricTridiagonalEigen.decompose(symmetricDiagonal.clone(), symmetricOffDiagonal, rows);
+            cc = new double[n][n];
+            for (int i = 0; i < n; i++) {
+                for (int k = 0; k < n; k++) {
+                    cc[i][k] = rows[i][order[k]] * amplitudes[k] / scale[i];
+                }
+            }
+            cellCoefficients = cc;
+            return cc;
+        }
+    }
+
+    @Override
+    public double remainingFraction(CleanupCriterion criterion, double poreVolumes) {
+        if (criterion == null) {
+            throw new TransportInputException("cleanup criterion", null, "one of effluent, mean, max");
+        }
+        TransportInputException.requireNonNegative("pore volumes (dimensionless)", poreVolumes);
+        double days = poreVolumes * daysPerPoreVolume;
+        double f;
+        switch (criterion) {
+            case EFFLUENT:
+                f = effluentMilligramsPerLitre(days) / (system.initialMaxC() > 0 ? system.initialMaxC() : 1);
+                break;
+            case MEAN_RESIDUAL:
+                f = storedMilligramsPerSquareMetre(days) / (initialMass > 0 ? initialMass : 1);
+                break;
+            default: {
+                double[] c = poreWaterMilligramsPerLitre(days);
+                double max = 0;
+                for (int i = 0; i < n; i++) {
+                    max = Math.max(max, system.capM()[i] * c[i] / system.rhoB()[i]);
+                }
+                f = max / (initialMaxSoil > 0 ? initialMaxSoil : 1);
+            }
+        }
+        return Math.min(1, Math.max(0, f));
+    }
+
+    /**
+     * From the slowest mode alone: a_1 exp(-lambda_1 t) = target, which the late-time tail
+     * follows (for the maximum, the effluent's estimate).
+     */
+    @Override
+    public double poreVolumeGuess(CleanupCriterion criterion, double targetFraction) {
+        double[] a = criterion == CleanupCriterion.MEAN_RESIDUAL ? massCoefficients : effluentCoefficients;
+        double ref = criterion == CleanupCriterion.MEAN_RESIDUAL ? initialMass : system.initialMaxC();
+        double lead = a[0] / (ref > 0 ? ref : 1);
+        if (!(lead > targetFraction) || !(rates[0] > 0)) {
+            return 1;
+        }
+        return Math.log(lead / targetFraction) / rates[0] / daysPerPoreVolume;
+    }
+
+    /**
+     * Pore volumes until {@code criterion} falls to {@code targetFraction} of the initial value
+     * (clean inflow), by {@link PoreVolumeSearch} on this solution.
+     */
+    public PoreVolumeResult poreVolumesToTarget(CleanupCriterion criterion, double targetFraction, double maxPoreVolumes) {
+        return PoreVolumeSearch.solve(this, criterion, targetFraction, maxPoreVolumes);
+    }
+
+    /**
+     * Pore volumes to target with Richardson extrapolation in space (Richardson 1911): the modal
+     * solution has no time error, so with the grid of {@code settings} and the grid with every
+     * cell halved the pore volumes behave as T + a dz^2 + higher terms (central scheme, no upwind
+     * faces) and (4 T(dz/2) - T(dz)) / 3 removes the leading term; |fine - coarse| / 3 estimates
+     * the error of the fine grid. The cost measure of the result is the sum of the squared cell
+     * counts (the decompositions' work is of that order).
+     */
+    public static ExtrapolatedTarget extrapolatedPoreVolumesToTarget(FlushingColumn column, SolverSettings settings,
+            CleanupCriterion criterion, double targetFraction, double maxPoreVolumes) {
+        ModalFlushingSolution coarse = of(column, settings, 1);
+        ModalFlushingSolution fine = of(column, settings, 2);
+        PoreVolumeResult a = coarse.poreVolumesToTarget(criterion, targetFraction, maxPoreVolumes);
+        PoreVolumeResult b = fine.poreVolumesToTarget(criterion, targetFraction, maxPoreVolumes);
+        long cost = (long) coarse.n * coarse.n + (long) fine.n * fine.n;
+        if (!a.reachable() || !b.reachable()) {
+            return new ExtrapolatedTarget(criterion, targetFraction, false, Double.NaN, a.poreVolumes(), b.poreVolumes(),
+                    Double.NaN, cost);
+        }
+        return new ExtrapolatedTarget(criterion, targetFraction, true, (4 * b.poreVolumes() - a.poreVolumes()) / 3,
+                a.poreVolumes(), b.poreVolumes(), Math.abs(b.poreVolumes() - a.poreVolumes()) / 3, cost);
+    }
+
+    /** The settings the grid was made with. */
+    public SolverSettings settings() {
+        return settings;
+    }
+}
