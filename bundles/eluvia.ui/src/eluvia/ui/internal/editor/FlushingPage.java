@@ -66,7 +66,7 @@ final class FlushingPage extends MasterDetailPage<FlushingDesign> {
                 .number(P.getFlushingDesign_DarcyFluxMetresPerDay(), flux())
                 .column(Messages.Flushing_criterion, d -> Labels.of(d.getCriterion()))
                 .column(Messages.Flushing_method, d -> Labels.of(d.getSolutionMethod()))
-                .column(NumberSpec.fixed(Messages.Flushing_daysPerWeek, "d", Range.any()).label(bindings.units()),
+                .column(NumberSpec.fixed(Messages.Flushing_daysPerWeek, "d/week", Range.any()).label(bindings.units()),
                         d -> Numbers.format(d.getOperatingDaysPerWeek()));
     }
 
@@ -92,7 +92,7 @@ final class FlushingPage extends MasterDetailPage<FlushingDesign> {
         b.choice(form, d, P.getFlushingDesign_Zone(), Messages.Flushing_zone, zones(), Labels::name);
         b.number(form, d, P.getFlushingDesign_DarcyFluxMetresPerDay(), flux());
         b.number(form, d, P.getFlushingDesign_OperatingDaysPerWeek(),
-                NumberSpec.fixed(Messages.Flushing_daysPerWeek, "d", Range.of(0, false, 7, true)));
+                NumberSpec.fixed(Messages.Flushing_daysPerWeek, "d/week", Range.of(0, false, 7, true)));
         b.number(form, d, P.getFlushingDesign_CaptureEfficiency(),
                 NumberSpec.fixed(Messages.Flushing_capture, "-", Range.of(0, false, 1, true)));
         b.choice(form, d, P.getFlushingDesign_Criterion(), Messages.Flushing_criterion, ComplianceCriterion.VALUES, Labels::of);
