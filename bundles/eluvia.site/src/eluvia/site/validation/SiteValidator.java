@@ -991,6 +991,14 @@ public final class SiteValidator {
             error(settings, label, "runCount", Integer.toString(runs), MIN_UNCERTAINTY_RUNS + " to " + MAX_UNCERTAINTY_RUNS,
                     "enter the number of Monte Carlo runs; 1,000 to 10,000 is usual");
         }
+        int inputs = settings.getInputs().size();
+        if (runs >= MIN_UNCERTAINTY_RUNS && !settings.getRankCorrelations().isEmpty() && runs <= inputs + 1) {
+            // the rank correlation is imposed through the Cholesky factor of the sample correlation
+            // of all inputs' scores, which is positive definite only with more runs than inputs + 1
+            error(settings, label, "runCount", Integer.toString(runs),
+                    "more than " + (inputs + 1) + " (the number of uncertain inputs + 1) when rank correlations are set",
+                    "raise the number of runs (1,000 to 10,000 is usual) or remove the rank correlations");
+        }
         if (settings.isEnabled() && settings.getInputs().isEmpty()) {
             warning(settings, label, "enabled", "true", "true only with at least one uncertain input",
                     "add the uncertain inputs, or switch the uncertainty analysis off");

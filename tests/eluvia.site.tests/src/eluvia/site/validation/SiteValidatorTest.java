@@ -407,6 +407,10 @@ final class SiteValidatorTest {
                         "not empty"),
                 // Uncertainty (ranges: what a distribution needs to be defined, and the Monte Carlo engine's limits)
                 error("too few Monte Carlo runs", p -> uncertainty(p).setRunCount(1), p -> uncertainty(p), "runCount", "1", "2 to 10000000"),
+                // Iman-Conover needs a positive definite sample correlation of the scores: more runs than inputs + 1
+                // (the example has 5 uncertain inputs and one rank correlation: 6 runs are too few)
+                error("too few runs for the rank correlations", p -> uncertainty(p).setRunCount(6),
+                        p -> uncertainty(p), "runCount", "6", "more than 6 (the number of uncertain inputs + 1) when rank correlations are set"),
                 warning("uncertainty on without inputs", p -> { uncertainty(p).getRankCorrelations().clear(); uncertainty(p).getInputs().clear(); uncertainty(p).setEnabled(true); },
                         p -> uncertainty(p), "enabled", "true", "at least one uncertain input"),
                 error("duplicate uncertain input names", p -> uncertain(p, 1).setName(uncertain(p, 0).getName().toUpperCase()),
