@@ -522,12 +522,12 @@ public final class DesignReport {
                 StringBuilder caption = new StringBuilder("Plan, to scale: ");
                 if (plan.grid() != null) {
                     caption.append("the block model's columns coloured by their highest ").append(c.getName())
-                            .append(" estimate over depth, ");
+                            .append(" estimate over depth (blank where no block is estimated), ");
                 }
                 caption.append("sampling locations coloured by the highest ").append(c.getName())
                         .append(" sample (non-detects at their detection limit)");
                 if (plan.valueMarker() != null) {
-                    caption.append(", one colour scale (mg/kg) changing from greys to warm colours at ")
+                    caption.append(", one colour scale (mg/kg) changing from greys to warm colours at the ")
                             .append(plan.valueMarker().label());
                 }
                 caption.append("; the site boundary, the entered zone footprints");

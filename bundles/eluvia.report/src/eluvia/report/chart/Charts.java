@@ -3,6 +3,7 @@ package eluvia.report.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.GradientPaint;
 import java.awt.Graphics2D;
 import java.awt.Paint;
 import java.awt.RenderingHints;
@@ -41,6 +42,7 @@ import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.Plot;
 import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.CrosshairState;
 import org.jfree.chart.plot.PlotRenderingInfo;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
@@ -52,20 +54,24 @@ import org.jfree.chart.renderer.category.StandardBarPainter;
 import org.jfree.chart.renderer.xy.StandardXYBarPainter;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.renderer.xy.XYItemRendererState;
 import org.jfree.chart.renderer.xy.XYShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.PaintScaleLegend;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.GradientPaintTransformType;
 import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.StandardGradientPaintTransformer;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.Range;
 import org.jfree.data.category.DefaultCategoryDataset;
 import org.jfree.data.category.DefaultIntervalCategoryDataset;
 import org.jfree.data.xy.DefaultXYZDataset;
 import org.jfree.data.xy.XYIntervalSeries;
+import org.jfree.data.xy.XYDataset;
 import org.jfree.data.xy.XYIntervalSeriesCollection;
 import org.jfree.data.xy.XYSeriesCollection;
 
@@ -94,10 +100,10 @@ public final class Charts {
             new float[] { 5f, 3f }, 0f);
     private static final Stroke OUTLINE_STROKE = new BasicStroke(1.6f);
     private static final float[][] DASHES = { null, { 7f, 4f }, { 2f, 3f }, { 9f, 3f, 2f, 3f } };
-    private static final Shape POINT_SHAPE = new Ellipse2D.Double(-4.5, -4.5, 9, 9);
+    private static final Shape POINT_SHAPE = new Ellipse2D.Double(-4, -4, 8, 8);
     /** A white band under outlines drawn over coloured cells, so that the line reads on any cell colour. */
-    private static final Stroke HALO_STROKE = new BasicStroke(3.6f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
-    private static final Color HALO = new Color(255, 255, 255, 190);
+    private static final Stroke HALO_STROKE = new BasicStroke(3.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    private static final Color HALO = new Color(255, 255, 255, 170);
     /** Cells are drawn at least this many image pixels wide on the longer side, so viewers that smooth images keep edges. */
     private static final int CELL_IMAGE_PIXELS = 600;
     /** Margin added around the data of plan and section views, as a fraction of their extent. */
@@ -362,7 +368,7 @@ public final class Charts {
      */
     private static JFreeChart plan(PlanView c, UnaryOperator<String> text) {
         DefaultXYZDataset data = new DefaultXYZDataset();
-        XYShapeRenderer r = new XYShapeRenderer();
+        XYShapeRenderer r = new RingedPoints();
         ValueScale scale = ValueScale.of(c.points(), c.grid(), c.valueMarker(), c.logValue());
         LegendItemCollection legend = new LegendItemCollection();
         if (!c.points().isEmpty()) {
@@ -374,18 +380,23 @@ public final class Charts {
             }
             data.addSeries(text.apply(c.pointsLabel()), xyz);
             r.setPaintScale(scale);
-            r.setDrawOutlines(true);
-            r.setUseOutlinePaint(true);
-            r.setSeriesOutlinePaint(0, Palette.INK);
-            r.setSeriesOutlineStroke(0, new BasicStroke(0.8f));
+            r.setDrawOutlines(false);
             r.setSeriesShape(0, POINT_SHAPE);
-            legend.add(legendShape(text.apply(c.pointsLabel()), POINT_SHAPE, Color.WHITE));
+            legend.add(legendShape(text.apply(c.pointsLabel()), RingedPoints.RING, Color.WHITE));
         }
         boolean cells = c.grid() != null;
         if (cells) {
             r.addAnnotation(new CellImage(c.grid(), scale), Layer.BACKGROUND);
             legend.add(legendShape(text.apply(c.grid().name()), new Rectangle2D.Double(-5, -5, 10, 10),
                     scale.getPaint(scale.getUpperBound())));
+        }
+        if (scale != null && c.valueMarker() != null) {
+            // a swatch from the colour just below the level to the one just above it
+            LegendItem step = legendShape(text.apply("Colour step: " + c.valueMarker().label()),
+                    new Rectangle2D.Double(-8, -5, 16, 10), new GradientPaint(0, 0, Palette.belowLevel(1), 16, 0,
+                            Palette.aboveLevel(0)));
+            step.setFillPaintTransformer(new StandardGradientPaintTransformer(GradientPaintTransformType.HORIZONTAL));
+            legend.add(step);
         }
         for (Outline o : c.outlines()) {
             Stroke stroke = outlineStroke(o.kind());
@@ -407,11 +418,7 @@ public final class Charts {
         JFreeChart chart = finish(plot, true);
         chart.getLegend().setItemLabelPadding(new RectangleInsets(2, 3, 2, 10));
         if (scale != null) {
-            String title = c.valueAxis().title();
-            if (c.valueMarker() != null) {
-                title += "; colour step at " + c.valueMarker().label();
-            }
-            chart.addSubtitle(colourLegend(scale, c.logValue(), title, text));
+            chart.addSubtitle(colourLegend(scale, c.logValue(), c.valueAxis().title(), text));
         }
         return chart;
     }
@@ -420,8 +427,9 @@ public final class Charts {
         return switch (kind) {
         case ZONE -> OUTLINE_STROKE;
         case BOUNDARY -> new BasicStroke(1.0f);
-        case PROPOSED -> new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] { 7f, 4f }, 0f);
-        case ENLARGED -> new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] { 2.5f, 2.5f }, 0f);
+        case PROPOSED -> new BasicStroke(1.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                new float[] { 8f, 3f, 2f, 3f }, 0f);
+        case ENLARGED -> new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] { 4f, 3f }, 0f);
         };
     }
 
@@ -874,6 +882,34 @@ public final class Charts {
         private double position(double v, double from, double to) {
             double f = log ? (Math.log(v) - Math.log(from)) / (Math.log(to) - Math.log(from)) : (v - from) / (to - from);
             return Double.isFinite(f) ? f : 1;
+        }
+    }
+
+    /**
+     * Points of a plan coloured by value inside a white ring with an ink edge, so that a point reads
+     * on cells of any colour, its own included.
+     */
+    static final class RingedPoints extends XYShapeRenderer {
+        private static final long serialVersionUID = 1L;
+        /** The ring, centred on the point, in page units. */
+        static final Shape RING = new Ellipse2D.Double(-6.5, -6.5, 13, 13);
+        private static final Stroke RING_STROKE = new BasicStroke(0.8f);
+
+        @Override
+        public void drawItem(Graphics2D g2, XYItemRendererState state, Rectangle2D dataArea, PlotRenderingInfo info,
+                XYPlot plot, ValueAxis domainAxis, ValueAxis rangeAxis, XYDataset dataset, int series, int item,
+                CrosshairState crosshairState, int pass) {
+            if (pass == 1) {
+                double x = domainAxis.valueToJava2D(dataset.getXValue(series, item), dataArea, plot.getDomainAxisEdge());
+                double y = rangeAxis.valueToJava2D(dataset.getYValue(series, item), dataArea, plot.getRangeAxisEdge());
+                Shape ring = AffineTransform.getTranslateInstance(x, y).createTransformedShape(RING);
+                g2.setPaint(Color.WHITE);
+                g2.fill(ring);
+                g2.setPaint(Palette.INK);
+                g2.setStroke(RING_STROKE);
+                g2.draw(ring);
+            }
+            super.drawItem(g2, state, dataArea, info, plot, domainAxis, rangeAxis, dataset, series, item, crosshairState, pass);
         }
     }
 

@@ -321,7 +321,7 @@ public final class ResultFigures {
         ValueGrid grid = cz == null ? null : blockColumns(cz.estimate(), units);
         double level = cz != null ? cz.cleanupLevelMilligramsPerKg() : cleanupLevel(p, contaminant);
         Marker marker = level > 0 && Double.isFinite(level)
-                ? new Marker(level, "the cleanup level " + InputTables.number(level) + " mg/kg")
+                ? new Marker(level, "cleanup level " + InputTables.number(level) + " mg/kg")
                 : null;
         if (points.isEmpty() && outlines.isEmpty() && grid == null) {
             return null;
@@ -381,8 +381,8 @@ public final class ResultFigures {
         }
         String size = units.format(m.blockEastingMetres(), Dimension.LENGTH) + " x "
                 + units.format(m.blockNorthingMetres(), Dimension.LENGTH);
-        String name = gx == 1 && gy == 1 ? "Block columns (" + size + "): highest estimate over depth"
-                : "Block columns (" + size + ") in groups of " + gx + " x " + gy + ": highest estimate";
+        String name = gx == 1 && gy == 1 ? "Block columns (" + size + "): highest estimate over depth, blank if none"
+                : "Block columns (" + size + ") in groups of " + gx + " x " + gy + ": highest estimate, blank if none";
         return new ValueGrid(name, units.value(m.originEastingMetres(), Dimension.LENGTH),
                 units.value(m.originNorthingMetres(), Dimension.LENGTH),
                 units.value(gx * m.blockEastingMetres(), Dimension.LENGTH),

@@ -178,8 +178,8 @@ final class ChartsRenderTest {
         // the cell without a value is not drawn: the plot's white shows through
         java.awt.Color none = pixel(image, p, data, 2.5 * 1 + 1.25, 48.75);
         assertEquals(java.awt.Color.WHITE, none);
-        // the legend names the points, the cells and each outline
-        assertEquals(2 + plan.outlines().size(), p.getFixedLegendItems().getItemCount());
+        // the legend names the points, the cells, the colour step and each outline
+        assertEquals(3 + plan.outlines().size(), p.getFixedLegendItems().getItemCount());
         assertEquals("cell", plan.data().rows().get(plan.data().rows().size() - 1).get(0));
     }
 
