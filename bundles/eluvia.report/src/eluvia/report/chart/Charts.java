@@ -388,7 +388,7 @@ public final class Charts {
         if (cells) {
             r.addAnnotation(new CellImage(c.grid(), scale), Layer.BACKGROUND);
             legend.add(legendShape(text.apply(c.grid().name()), new Rectangle2D.Double(-5, -5, 10, 10),
-                    scale.getPaint(scale.getUpperBound())));
+                    scale == null ? Palette.RULE : scale.getPaint(scale.getUpperBound())));
         }
         if (scale != null && c.valueMarker() != null) {
             // a swatch from the colour just below the level to the one just above it

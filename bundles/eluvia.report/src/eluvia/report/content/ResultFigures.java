@@ -318,7 +318,7 @@ public final class ResultFigures {
         ContaminantZone cz = !analysed ? null : zones.contaminants().stream()
                 .filter(x -> x.contaminantName().equals(contaminant.getName()) && x.estimate() != null).findFirst()
                 .orElse(null);
-        ValueGrid grid = cz == null ? null : blockColumns(cz.estimate(), units);
+        ValueGrid grid = cz == null || cz.estimate().estimatedBlockCount() == 0 ? null : blockColumns(cz.estimate(), units);
         double level = cz != null ? cz.cleanupLevelMilligramsPerKg() : cleanupLevel(p, contaminant);
         Marker marker = level > 0 && Double.isFinite(level)
                 ? new Marker(level, "cleanup level " + InputTables.number(level) + " mg/kg")
