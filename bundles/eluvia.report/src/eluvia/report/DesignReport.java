@@ -316,7 +316,7 @@ public final class DesignReport {
         for (FlushingDesignResult r : flushing) {
             flushingSection(d, r, run, p);
         }
-        zoneSection(d, p, run.zoneAnalysis());
+        zoneSection(d, p, run.zoneAnalysis(), run.enlargements());
         enlargementSection(d, p, run.enlargements());
         for (ExcavationResult x : run.excavations()) {
             excavationSection(d, x);
@@ -483,7 +483,7 @@ public final class DesignReport {
         d.section(new Section("Flushing: " + r.designName(), 2, b));
     }
 
-    private static void zoneSection(Document.Builder d, Project p, ZoneAnalysis z) {
+    private static void zoneSection(Document.Builder d, Project p, ZoneAnalysis z, List<ZoneEnlargement> enlargements) {
         List<Block> b = new ArrayList<>();
         if (z == null || !z.available()) {
             b.add(Paragraph.of("No zone was estimated from the samples: "
@@ -517,11 +517,28 @@ public final class DesignReport {
             }
         }
         for (Contaminant c : p.getContaminants()) {
-            PlanView plan = ResultFigures.plan(p, c);
+            PlanView plan = ResultFigures.plan(p, c, z, enlargements);
             if (plan != null) {
-                b.add(new Figure(ResultFigures.id("plan", c.getName()), plan, "Plan: sampling locations coloured by the "
-                        + "highest " + c.getName() + " sample (non-detects at their detection limit), the site boundary "
-                        + "and the entered zone footprints, to scale."));
+                StringBuilder caption = new StringBuilder("Plan, to scale: ");
+                if (plan.grid() != null) {
+                    caption.append("the block model's columns coloured by their highest ").append(c.getName())
+                            .append(" estimate over depth (blank where no block is estimated), ");
+                }
+                caption.append("sampling locations coloured by the highest ").append(c.getName())
+                        .append(" sample (non-detects at their detection limit)");
+                if (plan.valueMarker() != null) {
+                    caption.append(", one colour scale (mg/kg) changing from greys to warm colours at the ")
+                            .append(plan.valueMarker().label());
+                }
+                caption.append("; the site boundary, the entered zone footprints");
+                if (plan.outlines().stream().anyMatch(o -> o.kind() == eluvia.report.chart.Outline.Kind.PROPOSED)) {
+                    caption.append(", the proposed zone (").append(eluvia.zone.ExceedanceZone.FOOTPRINT_METHOD).append(")");
+                }
+                if (plan.outlines().stream().anyMatch(o -> o.kind() == eluvia.report.chart.Outline.Kind.ENLARGED)) {
+                    caption.append(" and each entered zone grown by its plan growth after the longest delay (the outline "
+                            + "the cost of delay prices)");
+                }
+                b.add(new Figure(ResultFigures.id("plan", c.getName()), plan, caption.append('.').toString()));
             }
         }
         d.section(new Section("Zone from the samples", 2, b));

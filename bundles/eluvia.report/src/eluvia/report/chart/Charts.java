@@ -3,11 +3,15 @@ package eluvia.report.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.GradientPaint;
 import java.awt.Graphics2D;
 import java.awt.Paint;
 import java.awt.RenderingHints;
+import java.awt.Shape;
 import java.awt.Stroke;
+import java.awt.geom.AffineTransform;
 import java.awt.geom.Ellipse2D;
+import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
@@ -23,6 +27,9 @@ import javax.imageio.ImageIO;
 
 import org.jfree.chart.ChartRenderingInfo;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.annotations.AbstractXYAnnotation;
 import org.jfree.chart.annotations.XYPolygonAnnotation;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.AxisLocation;
@@ -33,7 +40,10 @@ import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.Plot;
 import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.CrosshairState;
+import org.jfree.chart.plot.PlotRenderingInfo;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.PaintScale;
@@ -44,20 +54,24 @@ import org.jfree.chart.renderer.category.StandardBarPainter;
 import org.jfree.chart.renderer.xy.StandardXYBarPainter;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.renderer.xy.XYItemRendererState;
 import org.jfree.chart.renderer.xy.XYShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.PaintScaleLegend;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.GradientPaintTransformType;
 import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.StandardGradientPaintTransformer;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.Range;
 import org.jfree.data.category.DefaultCategoryDataset;
 import org.jfree.data.category.DefaultIntervalCategoryDataset;
 import org.jfree.data.xy.DefaultXYZDataset;
 import org.jfree.data.xy.XYIntervalSeries;
+import org.jfree.data.xy.XYDataset;
 import org.jfree.data.xy.XYIntervalSeriesCollection;
 import org.jfree.data.xy.XYSeriesCollection;
 
@@ -86,6 +100,12 @@ public final class Charts {
             new float[] { 5f, 3f }, 0f);
     private static final Stroke OUTLINE_STROKE = new BasicStroke(1.6f);
     private static final float[][] DASHES = { null, { 7f, 4f }, { 2f, 3f }, { 9f, 3f, 2f, 3f } };
+    private static final Shape POINT_SHAPE = new Ellipse2D.Double(-4, -4, 8, 8);
+    /** A white band under outlines drawn over coloured cells, so that the line reads on any cell colour. */
+    private static final Stroke HALO_STROKE = new BasicStroke(3.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    private static final Color HALO = new Color(255, 255, 255, 170);
+    /** Cells are drawn at least this many image pixels wide on the longer side, so viewers that smooth images keep edges. */
+    private static final int CELL_IMAGE_PIXELS = 600;
     /** Margin added around the data of plan and section views, as a fraction of their extent. */
     private static final double MAP_MARGIN = 0.06;
 
@@ -117,8 +137,7 @@ public final class Charts {
         } else if (spec instanceof BarChart c) {
             chart = bars(c, text);
         } else if (spec instanceof PlanView c) {
-            chart = map(c.points(), c.outlines(), c.eastingAxis(), c.northingAxis(), false, c.valueAxis(), c.logValue(),
-                    List.of(), text);
+            chart = plan(c, text);
         } else if (spec instanceof SectionView c) {
             chart = map(c.points(), c.outlines(), c.distanceAxis(), c.depthAxis(), true, c.valueAxis(), c.logValue(),
                     c.depthMarkers(), text);
@@ -148,7 +167,7 @@ public final class Charts {
     public static void draw(ChartSpec spec, Graphics2D g2, Rectangle2D area, UnaryOperator<String> text) {
         JFreeChart chart = build(spec, text);
         if (spec instanceof PlanView p) {
-            fitToScale(chart, area, 1.0, extent(p.points(), p.outlines()), false);
+            fitToScale(chart, area, 1.0, extent(p), false);
         } else if (spec instanceof SectionView s) {
             fitToScale(chart, area, s.verticalExaggeration(), extent(s.points(), s.outlines()), true);
         }
@@ -342,6 +361,122 @@ public final class Charts {
         return chartOf(plot, c.series().size() > 1);
     }
 
+    /**
+     * A plan: the grid's cells as one image under everything (nearest-neighbour, so cells keep sharp
+     * edges), the outlines by kind over a white halo when there are cells, the points on top; the
+     * points, cells and outlines named in a legend under the plot, the colour scale beside it.
+     */
+    private static JFreeChart plan(PlanView c, UnaryOperator<String> text) {
+        DefaultXYZDataset data = new DefaultXYZDataset();
+        XYShapeRenderer r = new RingedPoints();
+        ValueScale scale = ValueScale.of(c.points(), c.grid(), c.valueMarker(), c.logValue());
+        LegendItemCollection legend = new LegendItemCollection();
+        if (!c.points().isEmpty()) {
+            double[][] xyz = new double[3][c.points().size()];
+            for (int i = 0; i < c.points().size(); i++) {
+                xyz[0][i] = c.points().get(i).x();
+                xyz[1][i] = c.points().get(i).y();
+                xyz[2][i] = c.points().get(i).value();
+            }
+            data.addSeries(text.apply(c.pointsLabel()), xyz);
+            r.setPaintScale(scale);
+            r.setDrawOutlines(false);
+            r.setSeriesShape(0, POINT_SHAPE);
+            legend.add(legendShape(text.apply(c.pointsLabel()), RingedPoints.RING, Color.WHITE));
+        }
+        boolean cells = c.grid() != null;
+        if (cells) {
+            r.addAnnotation(new CellImage(c.grid(), scale), Layer.BACKGROUND);
+            legend.add(legendShape(text.apply(c.grid().name()), new Rectangle2D.Double(-5, -5, 10, 10),
+                    scale == null ? Palette.RULE : scale.getPaint(scale.getUpperBound())));
+        }
+        if (scale != null && c.valueMarker() != null) {
+            // a swatch from the colour just below the level to the one just above it
+            LegendItem step = legendShape(text.apply("Colour step: " + c.valueMarker().label()),
+                    new Rectangle2D.Double(-8, -5, 16, 10), new GradientPaint(0, 0, Palette.belowLevel(1), 16, 0,
+                            Palette.aboveLevel(0)));
+            step.setFillPaintTransformer(new StandardGradientPaintTransformer(GradientPaintTransformType.HORIZONTAL));
+            legend.add(step);
+        }
+        for (Outline o : c.outlines()) {
+            Stroke stroke = outlineStroke(o.kind());
+            Color colour = outlineColour(o.kind());
+            if (cells) {
+                r.addAnnotation(new XYPolygonAnnotation(o.interleaved(), HALO_STROKE, HALO, null), Layer.BACKGROUND);
+            }
+            Paint fill = o.kind() == Outline.Kind.ZONE && !cells ? withAlpha(Palette.ACCENT, 0.10) : null;
+            r.addAnnotation(new XYPolygonAnnotation(o.interleaved(), stroke, colour, fill), Layer.BACKGROUND);
+            legend.add(legendLine(text.apply(o.name()), stroke, colour));
+        }
+        NumberAxis x = numberAxis(c.eastingAxis(), text, false);
+        NumberAxis y = numberAxis(c.northingAxis(), text, false);
+        double[] e = extent(c);
+        x.setRange(padded(e[0], e[1]));
+        y.setRange(padded(e[2], e[3]));
+        XYPlot plot = new XYPlot(data, x, y, r);
+        plot.setFixedLegendItems(legend);
+        JFreeChart chart = finish(plot, true);
+        chart.getLegend().setItemLabelPadding(new RectangleInsets(2, 3, 2, 10));
+        if (scale != null) {
+            chart.addSubtitle(colourLegend(scale, c.logValue(), c.valueAxis().title(), text));
+        }
+        return chart;
+    }
+
+    private static Stroke outlineStroke(Outline.Kind kind) {
+        return switch (kind) {
+        case ZONE -> OUTLINE_STROKE;
+        case BOUNDARY -> new BasicStroke(1.0f);
+        case PROPOSED -> new BasicStroke(1.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                new float[] { 8f, 3f, 2f, 3f }, 0f);
+        case ENLARGED -> new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] { 4f, 3f }, 0f);
+        };
+    }
+
+    private static Color outlineColour(Outline.Kind kind) {
+        return switch (kind) {
+        case ZONE -> Palette.ACCENT;
+        case BOUNDARY -> Palette.MUTED;
+        case PROPOSED -> Palette.INK;
+        case ENLARGED -> Palette.GROWN;
+        };
+    }
+
+    private static LegendItem legendShape(String label, Shape shape, Paint fill) {
+        return new LegendItem(label, null, null, null, true, shape, true, fill, true, Palette.INK, new BasicStroke(0.8f),
+                false, new Line2D.Double(-8, 0, 8, 0), new BasicStroke(1f), Palette.INK);
+    }
+
+    private static LegendItem legendLine(String label, Stroke stroke, Paint colour) {
+        return new LegendItem(label, null, null, null, false, new Rectangle2D.Double(-1, -1, 2, 2), false, colour, false,
+                colour, stroke, true, new Line2D.Double(-11, 0, 11, 0), stroke, colour);
+    }
+
+    /** The colour strip beside a map; a logarithmic scale is drawn in log10 space (the strip is subdivided evenly). */
+    private static PaintScaleLegend colourLegend(ValueScale scale, boolean logValue, String title,
+            UnaryOperator<String> text) {
+        NumberAxis legendAxis = new NumberAxis(text.apply(title));
+        legendAxis.setAutoRangeIncludesZero(false);
+        styleAxis(legendAxis);
+        ValueScale strip = scale.inLog10Space();
+        legendAxis.setRange(strip.getLowerBound(), strip.getUpperBound());
+        if (logValue) {
+            legendAxis.setNumberFormatOverride(new PowerOfTenFormat());
+            legendAxis.setTickUnit(new NumberTickUnit(1.0));
+        }
+        PaintScaleLegend legend = new PaintScaleLegend(strip, legendAxis);
+        legend.setPosition(RectangleEdge.RIGHT);
+        legend.setAxisLocation(AxisLocation.BOTTOM_OR_RIGHT);
+        legend.setStripWidth(10);
+        legend.setStripOutlineVisible(true);
+        legend.setStripOutlinePaint(Palette.RULE);
+        legend.setSubdivisionCount(256);
+        legend.setAxisOffset(4);
+        legend.setMargin(new RectangleInsets(8, 10, 8, 2));
+        legend.setBackgroundPaint(Color.WHITE);
+        return legend;
+    }
+
     private static JFreeChart map(List<ValuePoint> points, List<Outline> outlines, Axis xAxis, Axis yAxis,
             boolean depthDown, Axis valueAxis, boolean logValue, List<Marker> yMarkers, UnaryOperator<String> text) {
         DefaultXYZDataset data = new DefaultXYZDataset();
@@ -364,11 +499,12 @@ public final class Charts {
             r.setSeriesShape(0, new Ellipse2D.Double(-4.5, -4.5, 9, 9));
         }
         for (Outline o : outlines) {
-            r.addAnnotation(new XYPolygonAnnotation(o.interleaved(), OUTLINE_STROKE, Palette.ACCENT,
-                    withAlpha(Palette.ACCENT, 0.10)), Layer.BACKGROUND);
+            Color colour = outlineColour(o.kind());
+            r.addAnnotation(new XYPolygonAnnotation(o.interleaved(), outlineStroke(o.kind()), colour,
+                    o.kind() == Outline.Kind.ZONE ? withAlpha(Palette.ACCENT, 0.10) : null), Layer.BACKGROUND);
             XYTextAnnotation label = new XYTextAnnotation(text.apply(o.name()), o.labelX(), o.labelY());
             label.setFont(ZONE_FONT);
-            label.setPaint(Palette.ACCENT);
+            label.setPaint(colour);
             r.addAnnotation(label, Layer.BACKGROUND);
         }
         NumberAxis x = numberAxis(xAxis, text, false);
@@ -387,30 +523,23 @@ public final class Charts {
         }
         JFreeChart chart = finish(plot, false);
         if (scale != null) {
-            // the legend strip is subdivided evenly along its axis, so a logarithmic scale is drawn in log10 space
-            NumberAxis legendAxis = numberAxis(valueAxis, text, false);
-            ValueScale strip = scale.inLog10Space();
-            legendAxis.setRange(strip.getLowerBound(), strip.getUpperBound());
-            if (logValue) {
-                legendAxis.setNumberFormatOverride(new PowerOfTenFormat());
-                legendAxis.setTickUnit(new NumberTickUnit(1.0));
-            }
-            PaintScaleLegend legend = new PaintScaleLegend(strip, legendAxis);
-            legend.setPosition(RectangleEdge.RIGHT);
-            legend.setAxisLocation(AxisLocation.BOTTOM_OR_RIGHT);
-            legend.setStripWidth(10);
-            legend.setStripOutlineVisible(true);
-            legend.setStripOutlinePaint(Palette.RULE);
-            legend.setSubdivisionCount(128);
-            legend.setAxisOffset(4);
-            legend.setMargin(new RectangleInsets(8, 10, 8, 2));
-            legend.setBackgroundPaint(Color.WHITE);
-            chart.addSubtitle(legend);
+            chart.addSubtitle(colourLegend(scale, logValue, valueAxis.title(), text));
         }
         return chart;
     }
 
     // ------------------------------------------------------------------------------------- scaling
+
+    /** xmin, xmax, ymin, ymax of a plan's points, outline vertices and cells. */
+    static double[] extent(PlanView p) {
+        double[] e = extent(p.points(), p.outlines());
+        ValueGrid g = p.grid();
+        if (g != null) {
+            grow(e, g.originX(), g.originY());
+            grow(e, g.endX(), g.endY());
+        }
+        return e;
+    }
 
     /** xmin, xmax, ymin, ymax of points and outline vertices. */
     static double[] extent(List<ValuePoint> points, List<Outline> outlines) {
@@ -638,21 +767,31 @@ public final class Charts {
         return Math.round(v * scale) / scale;
     }
 
-    /** Colours by value on the {@link Palette#sequential} scale, linear or logarithmic. */
+    /**
+     * Colours by value on the {@link Palette#sequential} scale, linear or logarithmic; with a level,
+     * on the split scale ({@link Palette#belowLevel} up to the level, {@link Palette#aboveLevel}
+     * above it). On a logarithmic scale a value at or below 0 takes the lowest colour.
+     */
     static final class ValueScale implements PaintScale {
+        /** Decades a logarithmic scale spans at most; lower values take its lowest colour. */
+        static final double MAX_DECADES = 6;
         private final double lower;
         private final double upper;
         private final boolean log;
+        /** The level where the colours change, NaN for none. */
+        private final double level;
 
-        private ValueScale(double lower, double upper, boolean log) {
+        private ValueScale(double lower, double upper, boolean log, double level) {
             this.lower = lower;
             this.upper = upper;
             this.log = log;
+            this.level = level;
         }
 
         /** The same colours on a linear scale of log10(value), for a legend strip; itself if linear. */
         ValueScale inLog10Space() {
-            return log ? new ValueScale(Math.log10(lower), Math.log10(upper), false) : this;
+            return log ? new ValueScale(Math.log10(lower), Math.log10(upper), false,
+                    Double.isNaN(level) ? Double.NaN : Math.log10(level)) : this;
         }
 
         static ValueScale of(double[] values, boolean log) {
@@ -670,7 +809,55 @@ public final class Charts {
                 lo -= pad;
                 hi += pad;
             }
-            return new ValueScale(lo, hi, log);
+            return new ValueScale(lo, hi, log, Double.NaN);
+        }
+
+        /**
+         * The scale of a plan: over the values of the points and the cells (on a logarithmic scale the
+         * positive ones, at most {@link #MAX_DECADES} below the highest) and the level, which lies
+         * inside the range with at least a decade (log) or a tenth of the range (linear) each side when
+         * every value is on one side of it. Null when there is no value to colour.
+         */
+        static ValueScale of(List<ValuePoint> points, ValueGrid grid, Marker level, boolean log) {
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            int n = 0;
+            for (ValuePoint p : points) {
+                if (!log || p.value() > 0) {
+                    lo = Math.min(lo, p.value());
+                    hi = Math.max(hi, p.value());
+                    n++;
+                }
+            }
+            if (grid != null) {
+                for (int i = 0; i < grid.countX() * grid.countY(); i++) {
+                    double v = grid.valueAt(i);
+                    if (!Double.isNaN(v) && (!log || v > 0)) {
+                        lo = Math.min(lo, v);
+                        hi = Math.max(hi, v);
+                        n++;
+                    }
+                }
+            }
+            if (n == 0) {
+                return null;
+            }
+            if (log) {
+                lo = Math.max(lo, hi * Math.pow(10, -MAX_DECADES));
+            }
+            if (level == null) {
+                return of(new double[] { lo, hi }, log);
+            }
+            double m = level.value();
+            if (log) {
+                lo = Math.min(lo, m / 10);
+                hi = Math.max(hi, m * 10);
+            } else {
+                double span = Math.max(hi - lo, Math.max(Math.abs(m) * 0.1, 1e-9));
+                lo = Math.min(lo, m - 0.1 * span);
+                hi = Math.max(hi, m + 0.1 * span);
+            }
+            return new ValueScale(lo, hi, log, m);
         }
 
         @Override
@@ -685,9 +872,103 @@ public final class Charts {
 
         @Override
         public Paint getPaint(double value) {
-            double f = log ? (Math.log(value) - Math.log(lower)) / (Math.log(upper) - Math.log(lower))
-                    : (value - lower) / (upper - lower);
-            return Palette.sequential(f);
+            double v = log && !(value > 0) ? lower : value;
+            if (Double.isNaN(level)) {
+                return Palette.sequential(position(v, lower, upper));
+            }
+            return v > level ? Palette.aboveLevel(position(v, level, upper)) : Palette.belowLevel(position(v, lower, level));
+        }
+
+        private double position(double v, double from, double to) {
+            double f = log ? (Math.log(v) - Math.log(from)) / (Math.log(to) - Math.log(from)) : (v - from) / (to - from);
+            return Double.isFinite(f) ? f : 1;
+        }
+    }
+
+    /**
+     * Points of a plan coloured by value inside a white ring with an ink edge, so that a point reads
+     * on cells of any colour, its own included.
+     */
+    static final class RingedPoints extends XYShapeRenderer {
+        private static final long serialVersionUID = 1L;
+        /** The ring, centred on the point, in page units. */
+        static final Shape RING = new Ellipse2D.Double(-6.5, -6.5, 13, 13);
+        private static final Stroke RING_STROKE = new BasicStroke(0.8f);
+
+        @Override
+        public void drawItem(Graphics2D g2, XYItemRendererState state, Rectangle2D dataArea, PlotRenderingInfo info,
+                XYPlot plot, ValueAxis domainAxis, ValueAxis rangeAxis, XYDataset dataset, int series, int item,
+                CrosshairState crosshairState, int pass) {
+            if (pass == 1) {
+                double x = domainAxis.valueToJava2D(dataset.getXValue(series, item), dataArea, plot.getDomainAxisEdge());
+                double y = rangeAxis.valueToJava2D(dataset.getYValue(series, item), dataArea, plot.getRangeAxisEdge());
+                Shape ring = AffineTransform.getTranslateInstance(x, y).createTransformedShape(RING);
+                g2.setPaint(Color.WHITE);
+                g2.fill(ring);
+                g2.setPaint(Palette.INK);
+                g2.setStroke(RING_STROKE);
+                g2.draw(ring);
+            }
+            super.drawItem(g2, state, dataArea, info, plot, domainAxis, rangeAxis, dataset, series, item, crosshairState, pass);
+        }
+    }
+
+    /**
+     * The cells of a {@link ValueGrid} as one image placed on the plot in data coordinates (row 0 of
+     * the image is the northern row), clipped to the grid's extent; drawn nearest-neighbour.
+     */
+    static final class CellImage extends AbstractXYAnnotation {
+        private static final long serialVersionUID = 1L;
+        private final transient ValueGrid grid;
+        private final transient BufferedImage image;
+
+        CellImage(ValueGrid grid, ValueScale scale) {
+            this.grid = grid;
+            int nx = grid.countX();
+            int ny = grid.countY();
+            int k = Math.max(1, Math.min(16, (int) Math.ceil((double) CELL_IMAGE_PIXELS / Math.max(nx, ny))));
+            image = new BufferedImage(nx * k, ny * k, BufferedImage.TYPE_INT_ARGB);
+            int[] row = new int[nx * k];
+            for (int j = 0; j < ny; j++) {
+                for (int i = 0; i < nx; i++) {
+                    double v = grid.valueAt(i, j);
+                    int argb = Double.isNaN(v) ? 0 : ((Color) scale.getPaint(v)).getRGB();
+                    java.util.Arrays.fill(row, i * k, (i + 1) * k, argb);
+                }
+                for (int r = 0; r < k; r++) {
+                    image.setRGB(0, (ny - 1 - j) * k + r, nx * k, 1, row, 0, nx * k);
+                }
+            }
+        }
+
+        @Override
+        public void draw(Graphics2D g2, XYPlot plot, Rectangle2D dataArea, ValueAxis domainAxis, ValueAxis rangeAxis,
+                int rendererIndex, PlotRenderingInfo info) {
+            RectangleEdge xEdge = Plot.resolveDomainAxisLocation(plot.getDomainAxisLocation(), plot.getOrientation());
+            RectangleEdge yEdge = Plot.resolveRangeAxisLocation(plot.getRangeAxisLocation(), plot.getOrientation());
+            double west = domainAxis.valueToJava2D(grid.originX(), dataArea, xEdge);
+            double east = domainAxis.valueToJava2D(grid.originX() + grid.countX() * grid.cellWidth(), dataArea, xEdge);
+            double south = rangeAxis.valueToJava2D(grid.originY(), dataArea, yEdge);
+            double north = rangeAxis.valueToJava2D(grid.originY() + grid.countY() * grid.cellHeight(), dataArea, yEdge);
+            double clipEast = domainAxis.valueToJava2D(grid.endX(), dataArea, xEdge);
+            double clipNorth = rangeAxis.valueToJava2D(grid.endY(), dataArea, yEdge);
+            Shape savedClip = g2.getClip();
+            Object savedHint = g2.getRenderingHint(RenderingHints.KEY_INTERPOLATION);
+            try {
+                Rectangle2D cells = new Rectangle2D.Double(Math.min(west, clipEast), Math.min(south, clipNorth),
+                        Math.abs(clipEast - west), Math.abs(south - clipNorth));
+                g2.clip(cells.createIntersection(dataArea));
+                g2.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR);
+                AffineTransform at = new AffineTransform();
+                at.translate(west, north);
+                at.scale((east - west) / image.getWidth(), (south - north) / image.getHeight());
+                g2.drawImage(image, at, null);
+            } finally {
+                g2.setClip(savedClip);
+                if (savedHint != null) {
+                    g2.setRenderingHint(RenderingHints.KEY_INTERPOLATION, savedHint);
+                }
+            }
         }
     }
 }

@@ -5,8 +5,10 @@ import java.util.List;
 
 /**
  * The colours of Eluvia's charts and documents: dark blue-grey ink on white, a deep teal accent,
- * warm ochre for cautions, muted series colours that stay apart in print, and a sequential scale
- * from pale sand to dark wine for concentrations. The HTML style sheet and the PDF use the same
+ * warm ochre for cautions, muted series colours that stay apart in print, a sequential scale
+ * from pale sand to dark wine for concentrations, and a scale split at a level (the cleanup level):
+ * cool near-white to light slate below it, golden sand to dark wine above it, so that the step at
+ * the level shows in hue as well as in lightness. The HTML style sheet and the PDF use the same
  * colours through {@link #hex(Color)}.
  */
 public final class Palette {
@@ -36,6 +38,16 @@ public final class Palette {
     private static final Color[] SEQUENTIAL = { new Color(0xF5, 0xEF, 0xDA), new Color(0xE9, 0xC8, 0x7C),
             new Color(0xD4, 0x8C, 0x3E), new Color(0xA6, 0x4E, 0x31), new Color(0x58, 0x22, 0x33) };
 
+    /** Below a level: near white far below it, light slate just below it. */
+    private static final Color[] BELOW_LEVEL = { new Color(0xF3, 0xF5, 0xF5), new Color(0xC4, 0xD2, 0xD9) };
+
+    /** Above a level: golden sand just above it to dark wine. */
+    private static final Color[] ABOVE_LEVEL = { new Color(0xE9, 0xC9, 0x82), new Color(0xD3, 0x8D, 0x44),
+            new Color(0xA6, 0x50, 0x34), new Color(0x58, 0x22, 0x33) };
+
+    /** Outlines of zones grown from another (e.g. by dispersion): a deep slate blue that stays apart from the warm cells. */
+    public static final Color GROWN = new Color(0x2F, 0x4F, 0x8A);
+
     private Palette() {
     }
 
@@ -51,12 +63,36 @@ public final class Palette {
      * @param fraction position on the scale, dimensionless
      */
     public static Color sequential(double fraction) {
+        return interpolate(SEQUENTIAL, fraction);
+    }
+
+    /**
+     * A colour of the part of the split scale below the level: near white at {@code fraction} 0
+     * (far below), light slate at 1 (just below); clamped, linear in RGB.
+     *
+     * @param fraction position below the level, dimensionless
+     */
+    public static Color belowLevel(double fraction) {
+        return interpolate(BELOW_LEVEL, fraction);
+    }
+
+    /**
+     * A colour of the part of the split scale above the level: golden sand at {@code fraction} 0
+     * (just above), dark wine at 1; clamped, linear in RGB between four stops.
+     *
+     * @param fraction position above the level, dimensionless
+     */
+    public static Color aboveLevel(double fraction) {
+        return interpolate(ABOVE_LEVEL, fraction);
+    }
+
+    private static Color interpolate(Color[] stops, double fraction) {
         double f = Double.isNaN(fraction) ? 0 : Math.min(1, Math.max(0, fraction));
-        double pos = f * (SEQUENTIAL.length - 1);
-        int i = Math.min((int) Math.floor(pos), SEQUENTIAL.length - 2);
+        double pos = f * (stops.length - 1);
+        int i = Math.min((int) Math.floor(pos), stops.length - 2);
         double t = pos - i;
-        Color a = SEQUENTIAL[i];
-        Color b = SEQUENTIAL[i + 1];
+        Color a = stops[i];
+        Color b = stops[i + 1];
         return new Color(mix(a.getRed(), b.getRed(), t), mix(a.getGreen(), b.getGreen(), t), mix(a.getBlue(), b.getBlue(), t));
     }
 

@@ -312,6 +312,7 @@ public final class Messages extends NLS {
     public static String Page_zones;
     public static String Plan_analysis;
     public static String Plan_fraction;
+    public static String Plan_grown;
     public static String Plan_noAnalysis;
     public static String Plan_nothing;
     public static String Plan_proposed;

@@ -63,6 +63,31 @@ final class ChartFixtures {
                 pts, List.of(new Outline("Zone A", new double[] { 20, 60, 60, 20 }, new double[] { 5, 5, 15, 15 })), true);
     }
 
+    /**
+     * An invented plan over a 40 x 20 grid of cells whose values rise from the west (0.01) to the
+     * east (100) across a level of 1, with a zone, a proposed and a grown outline.
+     */
+    static PlanView planWithCells() {
+        int nx = 40;
+        int ny = 20;
+        double[] v = new double[nx * ny];
+        for (int j = 0; j < ny; j++) {
+            for (int i = 0; i < nx; i++) {
+                v[i + nx * j] = j == ny - 1 && i < 3 ? Double.NaN : Math.pow(10, -2 + 4.0 * i / (nx - 1));
+            }
+        }
+        ValueGrid grid = new ValueGrid("Invented cells", 0, 0, 2.5, 2.5, nx, ny, 100, 50, v);
+        List<ValuePoint> pts = List.of(new ValuePoint("A", 10, 10, 0.05), new ValuePoint("B", 80, 30, 40));
+        List<Outline> outlines = List.of(
+                new Outline("Boundary", new double[] { 0, 100, 100, 0 }, new double[] { 0, 0, 50, 50 }, Outline.Kind.BOUNDARY),
+                new Outline("Zone", new double[] { 60, 80, 80, 60 }, new double[] { 20, 20, 35, 35 }),
+                new Outline("Proposed", new double[] { 52, 98, 98, 52 }, new double[] { 2, 2, 48, 48 }, Outline.Kind.PROPOSED),
+                new Outline("Zone grown", new double[] { 58, 82, 82, 58 }, new double[] { 18, 18, 37, 37 },
+                        Outline.Kind.ENLARGED));
+        return new PlanView("", new Axis("Easting", "m"), new Axis("Northing", "m"), new Axis("Invented value", "mg/kg"),
+                pts, outlines, true, "Invented points", grid, new Marker(1, "level 1"));
+    }
+
     static SectionView section(double exaggeration) {
         List<ValuePoint> pts = List.of(new ValuePoint("P-1", 5, 0.5, 3), new ValuePoint("P-2", 25, 2.5, 90),
                 new ValuePoint("P-3", 45, 4.0, 10));
@@ -73,6 +98,7 @@ final class ChartFixtures {
     }
 
     static List<ChartSpec> all() {
-        return List.of(residualFraction(), profile(), histogram(), tornado(), bars(true), bars(false), plan(), section(4));
+        return List.of(residualFraction(), profile(), histogram(), tornado(), bars(true), bars(false), plan(), planWithCells(),
+                section(4));
     }
 }

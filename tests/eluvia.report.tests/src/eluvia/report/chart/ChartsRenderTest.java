@@ -155,4 +155,37 @@ final class ChartsRenderTest {
             g2.dispose();
         }
     }
+
+    @Test
+    void cellsAboveTheLevelAreWarmAndCellsBelowItCool() {
+        PlanView plan = ChartFixtures.planWithCells();
+        Rectangle2D area = new Rectangle2D.Double(0, 0, 800, 500);
+        JFreeChart chart = Charts.build(plan);
+        Charts.fitToScale(chart, area, 1.0, Charts.extent(plan), false);
+        BufferedImage image = new BufferedImage(800, 500, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g2 = image.createGraphics();
+        ChartRenderingInfo info = new ChartRenderingInfo();
+        chart.draw(g2, area, info);
+        g2.dispose();
+        Rectangle2D data = info.getPlotInfo().getDataArea();
+        XYPlot p = chart.getXYPlot();
+        // a cell in the west (value 0.01 x 10^(4 x 2/39), below the level 1) and one in the east (above it),
+        // both in the row at northing 6.25 m, away from every outline and point
+        java.awt.Color west = pixel(image, p, data, 2.5 * 2 + 1.25, 6.25);
+        java.awt.Color east = pixel(image, p, data, 2.5 * 36 + 1.25, 6.25);
+        assertTrue(west.getBlue() >= west.getRed(), "below the level: a cool grey, got " + west);
+        assertTrue(east.getRed() > east.getBlue() + 40, "above the level: a warm colour, got " + east);
+        // the cell without a value is not drawn: the plot's white shows through
+        java.awt.Color none = pixel(image, p, data, 2.5 * 1 + 1.25, 48.75);
+        assertEquals(java.awt.Color.WHITE, none);
+        // the legend names the points, the cells, the colour step and each outline
+        assertEquals(3 + plan.outlines().size(), p.getFixedLegendItems().getItemCount());
+        assertEquals("cell", plan.data().rows().get(plan.data().rows().size() - 1).get(0));
+    }
+
+    private static java.awt.Color pixel(BufferedImage image, XYPlot p, Rectangle2D data, double x, double y) {
+        int px = (int) Math.round(p.getDomainAxis().valueToJava2D(x, data, RectangleEdge.BOTTOM));
+        int py = (int) Math.round(p.getRangeAxis().valueToJava2D(y, data, RectangleEdge.LEFT));
+        return new java.awt.Color(image.getRGB(px, py));
+    }
 }

@@ -53,8 +53,13 @@ public final class UnitDisplay {
         return Numbers.format(toDisplay(storedValue, dimension), significantDigits) + " " + symbol(dimension);
     }
 
+    /** The same unit system for the report bundle's figures (charts in the chosen units). */
+    public eluvia.report.content.FigureUnits figureUnits() {
+        return eluvia.report.content.FigureUnits.of(system);
+    }
+
     /** A unit symbol with the exponents 2 and 3 written as superscripts ({@code m3} to {@code m³}). */
     public static String pretty(String symbol) {
-        return symbol.replaceAll("([a-zA-Z])2(?![0-9])", "$1\u00b2").replaceAll("([a-zA-Z])3(?![0-9])", "$1\u00b3");
+        return eluvia.report.content.FigureUnits.pretty(symbol);
     }
 }

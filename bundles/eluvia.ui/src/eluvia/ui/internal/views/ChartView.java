@@ -64,6 +64,7 @@ abstract class ChartView extends DocumentView {
         if (second != null) {
             second.addListener(SWT.Selection, e -> redrawChart());
         }
+        followUnitSystem(this::redrawChart);
     }
 
     private static Combo combo(Composite bar, String label) {
@@ -84,7 +85,11 @@ abstract class ChartView extends DocumentView {
         return List.of();
     }
 
-    /** The chart for the choices, or null when there is nothing to draw; put the reason in {@link #noChartReason}. */
+    /**
+     * The chart for the choices in the user's units ({@code units}: lengths, areas and volumes; pass
+     * {@link UnitDisplay#figureUnits()} to the report bundle's figures), or null when there is
+     * nothing to draw; put the reason in {@link #noChartReason}.
+     */
     abstract ChartSpec chart(DesignRun run, String firstChoice, String secondChoice, UnitDisplay units);
 
     /** Why there is no chart for the choices (shown in the chart's place). */

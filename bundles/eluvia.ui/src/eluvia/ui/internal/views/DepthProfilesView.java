@@ -28,6 +28,8 @@ import eluvia.ui.internal.charts.ChartCanvas;
 import eluvia.ui.internal.document.OpenDocuments;
 import eluvia.ui.internal.document.ProjectDocument;
 import eluvia.ui.internal.document.ResultState;
+import eluvia.ui.internal.fields.UnitDisplay;
+import eluvia.ui.internal.preferences.UiPreferences;
 
 /**
  * The Depth profiles view: soil concentration against depth for one flushing design and
@@ -35,7 +37,8 @@ import eluvia.ui.internal.document.ResultState;
  * 100 %, whole percent) and at the design's pore volumes. The design bundle computes the profiles
  * ({@link DepthProfiles#of}, the layered numerical solution) in a background job that a newer
  * choice cancels; the chart is the design package's own ({@link ResultFigures#depthProfiles}).
- * Depths m below ground, concentrations mg/kg of dry soil. The view computes nothing itself.
+ * Depths below ground in the user's length unit, concentrations mg/kg of dry soil. The view
+ * computes nothing itself.
  */
 public final class DepthProfilesView extends DocumentView {
 
@@ -54,6 +57,7 @@ public final class DepthProfilesView extends DocumentView {
     private Job job;
     private long generation;
     private DepthProfileSet shown;
+    private String shownFailure;
 
     public DepthProfilesView(Composite parent, OpenDocuments documents) {
         super(parent, documents);
@@ -99,6 +103,12 @@ public final class DepthProfilesView extends DocumentView {
         contaminant.addListener(SWT.Selection, e -> recompute());
         share.addListener(SWT.Selection, e -> recompute());
         addDisposeListener(e -> cancelJob());
+        // profiles still computing are drawn in the units of the moment when they arrive
+        followUnitSystem(() -> {
+            if (!busy()) {
+                drawShown();
+            }
+        });
         start();
     }
 
@@ -219,11 +229,18 @@ public final class DepthProfilesView extends DocumentView {
             return;
         }
         shown = set;
+        shownFailure = failure;
+        drawShown();
+    }
+
+    /** Draws the profiles shown (or the reason there are none) in the user's units. */
+    private void drawShown() {
+        DepthProfileSet set = shown;
         ChartSpec spec = null;
-        String reason = failure == null ? "" : failure;
+        String reason = shownFailure == null ? "" : shownFailure;
         if (set != null) {
             try {
-                spec = ResultFigures.depthProfiles(set);
+                spec = ResultFigures.depthProfiles(set, new UnitDisplay(UiPreferences.unitSystem()).figureUnits());
             } catch (RuntimeException e) {
                 reason = Objects.toString(e.getMessage(), e.getClass().getSimpleName());
             }

@@ -1,11 +1,15 @@
 package eluvia.ui.internal.views;
 
+import org.eclipse.jface.preference.IPreferenceStore;
+import org.eclipse.jface.util.IPropertyChangeListener;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Display;
 
 import eluvia.ui.internal.document.OpenDocuments;
 import eluvia.ui.internal.document.ProjectDocument;
 import eluvia.ui.internal.document.ResultState;
+import eluvia.ui.internal.preferences.UiPreferences;
 
 /**
  * A view's content that follows the active project document: it is told when another document
@@ -47,6 +51,30 @@ abstract class DocumentView extends Composite {
     /** Another document is active (or none). The default shows its latest results. */
     protected void showDocument(ProjectDocument documentOrNull) {
         showResults(documentOrNull, documents.results(documentOrNull));
+    }
+
+    /**
+     * Runs {@code redraw} on the UI thread whenever the user's unit system changes, until this view
+     * is disposed (charts and notes are drawn again in the new units).
+     */
+    protected final void followUnitSystem(Runnable redraw) {
+        IPropertyChangeListener l = e -> {
+            if (!UiPreferences.UNIT_SYSTEM.equals(e.getProperty()) || isDisposed()) {
+                return;
+            }
+            if (Display.getCurrent() == getDisplay()) {
+                redraw.run();
+            } else {
+                getDisplay().asyncExec(() -> {
+                    if (!isDisposed()) {
+                        redraw.run();
+                    }
+                });
+            }
+        };
+        IPreferenceStore store = UiPreferences.store();
+        store.addPropertyChangeListener(l);
+        addDisposeListener(e -> store.removePropertyChangeListener(l));
     }
 
     /** New results for the active document (document may be null: nothing open). */

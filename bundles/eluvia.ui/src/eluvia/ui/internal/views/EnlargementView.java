@@ -33,7 +33,7 @@ public final class EnlargementView extends ChartView {
 
     @Override
     ChartSpec chart(DesignRun run, String a, String b, UnitDisplay units) {
-        return ResultFigures.enlargement(run.enlargements());
+        return ResultFigures.enlargement(run.enlargements(), units.figureUnits());
     }
 
     @Override

@@ -7,6 +7,8 @@ import org.eclipse.swt.widgets.Composite;
 import eluvia.design.DesignRun;
 import eluvia.design.EnteredZoneComparison;
 import eluvia.design.ZoneAnalysis;
+import eluvia.design.ZoneEnlargement;
+import eluvia.design.ZoneOutline;
 import eluvia.report.chart.ChartSpec;
 import eluvia.report.content.ResultFigures;
 import eluvia.site.model.Contaminant;
@@ -18,10 +20,12 @@ import eluvia.ui.internal.fields.Numbers;
 import eluvia.ui.internal.fields.UnitDisplay;
 
 /**
- * The Plan view's content: the site to scale with the sampling locations coloured by the highest
- * sample of a contaminant, the site boundary and the zones (the design package's chart,
+ * The Plan view's content: the site to scale in the user's length unit with the block model's
+ * columns coloured by their highest estimate of a contaminant, the sampling locations coloured by
+ * the highest sample, the site boundary, the entered zones, the proposed zone and each entered zone
+ * grown by its enlargement after the longest delay (the design package's chart,
  * {@link ResultFigures#plan}), and the zone analysis's figures: volume above the cleanup level,
- * the proposed zone and how the entered zones hold it.
+ * the proposed zone, how the entered zones hold it and how far they grow.
  */
 public final class PlanView extends ChartView {
 
@@ -45,7 +49,8 @@ public final class PlanView extends ChartView {
     @Override
     ChartSpec chart(DesignRun run, String contaminantName, String unused, UnitDisplay units) {
         Contaminant c = contaminant(contaminantName);
-        return c == null || project().getSite() == null ? null : ResultFigures.plan(project(), c);
+        return c == null || project().getSite() == null ? null
+                : ResultFigures.plan(project(), c, run.zoneAnalysis(), run.enlargements(), units.figureUnits());
     }
 
     @Override
@@ -72,6 +77,14 @@ public final class PlanView extends ChartView {
             b.append(' ').append(e.zoneName()).append(": ").append(e.assessment());
             if (Double.isFinite(e.fractionInside())) {
                 b.append(' ').append(Messages.bind(Messages.Plan_fraction, Numbers.format(100 * e.fractionInside(), 3)));
+            }
+        }
+        Project p = project();
+        for (ZoneEnlargement e : run.enlargements()) {
+            ZoneOutline grown = p == null ? null : ResultFigures.enlargedOutline(p, e).orElse(null);
+            if (grown != null) {
+                b.append(' ').append(Messages.bind(Messages.Plan_grown, grown.basis(),
+                        u.format(grown.grownMetres(), Dimension.LENGTH, 3)));
             }
         }
         return b.toString();

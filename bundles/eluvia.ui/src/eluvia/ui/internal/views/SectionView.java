@@ -39,7 +39,8 @@ public final class SectionView extends ChartView {
     @Override
     ChartSpec chart(DesignRun run, String zone, String unused, UnitDisplay units) {
         ZoneEnlargement e = enlargement(run, zone);
-        return e == null || project() == null || project().getSite() == null ? null : ResultFigures.section(project(), e);
+        return e == null || project() == null || project().getSite() == null ? null
+                : ResultFigures.section(project(), e, units.figureUnits());
     }
 
     @Override

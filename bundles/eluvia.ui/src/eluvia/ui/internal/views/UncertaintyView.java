@@ -32,6 +32,9 @@ import eluvia.ui.internal.document.OpenDocuments;
 import eluvia.ui.internal.document.ProjectDocument;
 import eluvia.ui.internal.document.ResultState;
 import eluvia.ui.internal.fields.Numbers;
+import eluvia.ui.internal.fields.UnitDisplay;
+import eluvia.ui.internal.preferences.UiPreferences;
+import eluvia.site.units.Dimension;
 import eluvia.ui.internal.editor.Labels;
 import eluvia.ui.internal.uncertainty.UncertaintyJob;
 import eluvia.ui.internal.uncertainty.UncertaintySetup;
@@ -150,6 +153,7 @@ public final class UncertaintyView extends DocumentView {
         run.addListener(SWT.Selection, e -> runSimulation());
         cancel.addListener(SWT.Selection, e -> cancelSimulation());
         output.addListener(SWT.Selection, e -> showCharts());
+        followUnitSystem(this::showCharts);
         start();
     }
 
@@ -357,29 +361,47 @@ public final class UncertaintyView extends DocumentView {
         }
         UncertaintyHeadline h = r.headline(name);
         OutputStatistics st = h.statistics();
-        String unit = "1".equals(h.unit()) ? "PV" : h.unit();
+        // lengths, areas and volumes in the user's units (the simulation works in SI); others as computed
+        UnitDisplay u = new UnitDisplay(UiPreferences.unitSystem());
+        Dimension dim = dimensionOf(h.unit());
+        String unit = "1".equals(h.unit()) ? "PV" : dim == null ? h.unit() : u.symbol(dim);
         double[] samples = r.simulation().runs().completedOutputValues(name);
+        double[] shownSamples = dim == null ? samples : u.figureUnits().values(samples, dim);
         histogram.setChart(samples.length == 0 ? null : new Histogram(Messages.bind(Messages.Uncertainty_histogramTitle, name),
-                new Axis(name, unit), samples, Math.max(1, Math.min(Histogram.MAX_BINS, st.histogram().binCount())),
-                List.of(new Marker(st.p10(), "P10"), new Marker(st.p50(), "P50"), new Marker(st.p90(), "P90"))),
+                new Axis(name, unit), shownSamples, Math.max(1, Math.min(Histogram.MAX_BINS, st.histogram().binCount())),
+                List.of(new Marker(u.toDisplay(st.p10(), dim), "P10"), new Marker(u.toDisplay(st.p50(), dim), "P50"),
+                        new Marker(u.toDisplay(st.p90(), dim), "P90"))),
                 Messages.Uncertainty_noResult);
         eluvia.design.uncertainty.Tornado t = h.tornado();
         List<TornadoBar> bars = new ArrayList<>();
         for (eluvia.design.uncertainty.TornadoBar b : t.bars()) {
             if (Double.isFinite(b.outputAtLowInput()) && Double.isFinite(b.outputAtHighInput())) {
-                bars.add(new TornadoBar(b.inputName(), Numbers.format(b.lowInputValue(), 3) + " " + b.inputUnit(),
-                        Numbers.format(b.highInputValue(), 3) + " " + b.inputUnit(), b.outputAtLowInput(),
-                        b.outputAtHighInput()));
+                Dimension in = dimensionOf(b.inputUnit());
+                String inUnit = in == null ? b.inputUnit() : u.symbol(in);
+                bars.add(new TornadoBar(b.inputName(), Numbers.format(u.toDisplay(b.lowInputValue(), in), 3) + " " + inUnit,
+                        Numbers.format(u.toDisplay(b.highInputValue(), in), 3) + " " + inUnit,
+                        u.toDisplay(b.outputAtLowInput(), dim), u.toDisplay(b.outputAtHighInput(), dim)));
             }
         }
         tornado.setChart(bars.isEmpty() || !Double.isFinite(t.baseOutputValue()) ? null
                 : new Tornado(Messages.bind(Messages.Uncertainty_tornadoTitle, name), new Axis(name, unit),
-                        t.baseOutputValue(), bars), Messages.Uncertainty_noTornado);
+                        u.toDisplay(t.baseOutputValue(), dim), bars), Messages.Uncertainty_noTornado);
         statistics.setText(Messages.bind(Messages.Uncertainty_statistics,
-                new Object[] { st.sampleCount(), Numbers.format(st.mean(), 3), Numbers.format(st.standardDeviation(), 3),
-                        Numbers.format(st.p10(), 3), Numbers.format(st.p50(), 3), Numbers.format(st.p90(), 3), unit,
+                new Object[] { st.sampleCount(), Numbers.format(u.toDisplay(st.mean(), dim), 3),
+                        Numbers.format(u.toDisplay(st.standardDeviation(), dim), 3), Numbers.format(u.toDisplay(st.p10(), dim), 3),
+                        Numbers.format(u.toDisplay(st.p50(), dim), 3), Numbers.format(u.toDisplay(st.p90(), dim), 3), unit,
                         OutputStatistics.PERCENTILE_DEFINITION })
-                + " " + Messages.bind(Messages.Uncertainty_base, Numbers.format(h.baseValue(), 3), unit));
+                + " " + Messages.bind(Messages.Uncertainty_base, Numbers.format(u.toDisplay(h.baseValue(), dim), 3), unit));
+    }
+
+    /** The dimension of a length, area or volume unit of the simulation ("m", "m2", "m3"), null for any other unit. */
+    static Dimension dimensionOf(String siUnit) {
+        return switch (siUnit == null ? "" : siUnit) {
+        case "m" -> Dimension.LENGTH;
+        case "m2" -> Dimension.AREA;
+        case "m3" -> Dimension.VOLUME;
+        default -> null;
+        };
     }
 
     /** The latest result for the active document, or null (tests). */

@@ -60,6 +60,13 @@ final class AllResultViewsTest {
 
             PlanView plan = (PlanView) views[3];
             assertNotNull(plan.canvas().chart(), plan.notesText());
+            eluvia.report.chart.PlanView map = (eluvia.report.chart.PlanView) plan.canvas().chart();
+            // the design package's plan of the same run: block model columns, proposed and grown outlines
+            assertEquals(ResultFigures.plan(f.document.project(), f.document.project().getContaminants().get(0),
+                    direct.zoneAnalysis(), direct.enlargements()).data(), map.data());
+            assertNotNull(map.grid(), "the block model is drawn");
+            assertTrue(map.outlines().stream().anyMatch(o -> o.kind() == eluvia.report.chart.Outline.Kind.PROPOSED));
+            assertTrue(map.outlines().stream().anyMatch(o -> o.kind() == eluvia.report.chart.Outline.Kind.ENLARGED));
             SectionView section = (SectionView) views[4];
             if (direct.enlargements().stream().anyMatch(e -> e.available())) {
                 assertNotNull(section.canvas().chart(), section.notesText());
