@@ -34,6 +34,8 @@ public final class DesignComputation {
     private final ProjectDocument.Listener listener;
     private final Runnable start = this::start;
     private long generation;
+    /** A run is scheduled behind the debounce timer (UI thread only). */
+    private volatile boolean pending;
     private Job job;
     private DesignRun lastRun;
     private boolean disposed;
@@ -56,6 +58,7 @@ public final class DesignComputation {
         if (disposed) {
             return;
         }
+        pending = true;
         display.timerExec(-1, start);
         display.timerExec(DEBOUNCE_MILLISECONDS, start);
     }
@@ -66,6 +69,7 @@ public final class DesignComputation {
             return;
         }
         display.timerExec(-1, start);
+        pending = false;
         if (job != null) {
             job.cancel();
         }
@@ -141,6 +145,9 @@ public final class DesignComputation {
 
     /** True while a run is scheduled or in progress. */
     public boolean busy() {
+        if (pending) {
+            return true; // the debounce timer has not started the run yet
+        }
         Job j = job;
         return j != null && j.getState() != Job.NONE;
     }
