@@ -19,6 +19,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.UnaryOperator;
@@ -502,7 +503,14 @@ public final class Charts {
             Color colour = outlineColour(o.kind());
             r.addAnnotation(new XYPolygonAnnotation(o.interleaved(), outlineStroke(o.kind()), colour,
                     o.kind() == Outline.Kind.ZONE ? withAlpha(Palette.ACCENT, 0.10) : null), Layer.BACKGROUND);
-            XYTextAnnotation label = new XYTextAnnotation(text.apply(o.name()), o.labelX(), o.labelY());
+            // in a section the grown outlines nest about one centre: each label sits inside its
+            // outline's lower edge (the edges differ) instead of at the shared centre
+            boolean atLowerEdge = depthDown && o.kind() == Outline.Kind.ENLARGED;
+            XYTextAnnotation label = new XYTextAnnotation(text.apply(o.name()), o.labelX(),
+                    atLowerEdge ? Arrays.stream(o.y()).max().orElseThrow() : o.labelY());
+            if (atLowerEdge) {
+                label.setTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_CENTER);
+            }
             label.setFont(ZONE_FONT);
             label.setPaint(colour);
             r.addAnnotation(label, Layer.BACKGROUND);
