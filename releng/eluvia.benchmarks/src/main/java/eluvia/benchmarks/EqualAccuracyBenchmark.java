@@ -17,6 +17,9 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 import eluvia.transport.CleanupCriterion;
+import eluvia.transport.FlushingModels;
+import eluvia.transport.LayerTransport;
+import eluvia.transport.PoreVolumeSearch;
 import eluvia.transport.internal.FiniteLayerModel;
 import eluvia.transport.numerical.ExtrapolatedTargetSearch;
 import eluvia.transport.numerical.FlushingColumn;
@@ -39,7 +42,10 @@ import eluvia.transport.numerical.SorptionIsotherm;
  * <li>{@code bdf2 N H}: implicit solver, N cells, fixed steps of H pore volumes;</li>
  * <li>{@code bdf2x N H}: implicit solver with Richardson extrapolation, N and 2N cells, steps H and H/2;</li>
  * <li>{@code modal N}: modal solution (exact in time), N cells;</li>
- * <li>{@code modalx N}: modal solution with Richardson extrapolation in space, N and 2N cells.</li>
+ * <li>{@code modalx N}: modal solution with Richardson extrapolation in space, N and 2N cells;</li>
+ * <li>{@code series 0}: for context, the analytic path the product takes for an equilibrium layer
+ * (finite-layer series and pore-volume search, from the layer's transport numbers; relative
+ * accuracy 1e-10, so far beyond the accuracy of the case; no grid).</li>
  * </ul>
  * The setup computes the error of the setting and of its refinement (the scan's rule) against
  * the exact finite-layer series (Brenner 1962) in the same run, prints both and refuses to run
@@ -57,7 +63,7 @@ public class EqualAccuracyBenchmark {
     private static final double MAX_PORE_VOLUMES = 1000;
 
     @Param({ "P10-1e-3 mol 18 1e-3", "P10-1e-3 bdf2 40 0.04", "P10-1e-3 bdf2x 10 0.16", "P10-1e-3 modal 18",
-        "P10-1e-3 modalx 8",
+        "P10-1e-3 modalx 8", "P10-1e-3 series 0",
         "P1-1e-3 mol 12 1e-2", "P1-1e-3 bdf2 28 0.08", "P1-1e-3 bdf2 16 0.08", "P1-1e-3 modal 12", "P1-1e-3 modalx 6",
         "P10-3e-5 mol 128 1e-4", "P10-3e-5 bdf2x 18 0.04", "P10-3e-5 modalx 12",
         "P1-3e-5 mol 56 1e-2", "P1-3e-5 bdf2x 10 0.16", "P1-3e-5 bdf2x 6 0.16", "P1-3e-5 modalx 6" })
@@ -72,12 +78,14 @@ public class EqualAccuracyBenchmark {
     private FlushingRunRequest request;
     private MethodOfLinesFlushing baseline;
     private double daysPerPoreVolume;
+    private double peclet;
+    private double dispersionSquareMetresPerDay;
 
     @Setup
     public void setUp() {
         String[] parts = setting.split(" ");
         String[] caseParts = parts[0].substring(1).split("-", 2);
-        double peclet = Double.parseDouble(caseParts[0]);
+        peclet = Double.parseDouble(caseParts[0]);
         double accuracy = Double.parseDouble(caseParts[1]);
         method = parts[1];
         cells = Integer.parseInt(parts[2]);
@@ -85,6 +93,7 @@ public class EqualAccuracyBenchmark {
         column = Cases.column(Cases.layer(1 / peclet, SorptionIsotherm.linear(Cases.kdForRetardation(RETARDATION))), 1);
         grid = SolverSettings.builder().minimumCellsPerLayer(cells).maximumCellPeclet(2).build();
         request = FlushingRunRequest.upToPoreVolumes(MAX_PORE_VOLUMES).target(CleanupCriterion.EFFLUENT, TARGET).build();
+        dispersionSquareMetresPerDay = Cases.DARCY_FLUX_METRES_PER_DAY / Cases.WATER_CONTENT / peclet;
         daysPerPoreVolume = Cases.WATER_CONTENT * Cases.THICKNESS_METRES / Cases.DARCY_FLUX_METRES_PER_DAY;
         baseline = new MethodOfLinesFlushing(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
                 Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, cells);
@@ -116,6 +125,8 @@ public class EqualAccuracyBenchmark {
             case "bdf2x":
                 return ExtrapolatedTargetSearch.poreVolumesToTarget(column, grid, control / 2, CleanupCriterion.EFFLUENT,
                         TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            case "series":
+                return series();
             case "modal":
             case "modalx": {
                 SolverSettings finer = SolverSettings.builder().minimumCellsPerLayer(EqualAccuracyScan.nextGrid(cells))
@@ -131,6 +142,13 @@ public class EqualAccuracyBenchmark {
         }
     }
 
+    /** The finite-layer series from the case's numbers: R, v = q / theta, D = v alpha_L (no diffusion), P = v L / D, no decay. */
+    private double series() {
+        return PoreVolumeSearch.solve(FlushingModels.finiteLayer(new LayerTransport(RETARDATION,
+                Cases.DARCY_FLUX_METRES_PER_DAY / Cases.WATER_CONTENT, 1, dispersionSquareMetresPerDay,
+                peclet, 0)), CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
+    }
+
     @Benchmark
     public double solve() {
         switch (method) {
@@ -142,6 +160,8 @@ public class EqualAccuracyBenchmark {
             case "bdf2x":
                 return ExtrapolatedTargetSearch.poreVolumesToTarget(column, grid, control, CleanupCriterion.EFFLUENT,
                         TARGET, MAX_PORE_VOLUMES).poreVolumes();
+            case "series":
+                return series();
             case "modal":
                 return ModalFlushingSolution.of(column, grid)
                         .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
