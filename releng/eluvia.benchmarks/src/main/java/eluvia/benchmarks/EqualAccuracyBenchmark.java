@@ -91,12 +91,12 @@ public class EqualAccuracyBenchmark {
         cells = Integer.parseInt(parts[2]);
         control = parts.length > 3 ? Double.parseDouble(parts[3]) : Double.NaN;
         column = Cases.column(Cases.layer(1 / peclet, SorptionIsotherm.linear(Cases.kdForRetardation(RETARDATION))), 1);
-        grid = SolverSettings.builder().minimumCellsPerLayer(cells).maximumCellPeclet(2).build();
+        grid = SolverSettings.builder().minimumCellsPerLayer(Math.max(1, cells)).maximumCellPeclet(2).build();
         request = FlushingRunRequest.upToPoreVolumes(MAX_PORE_VOLUMES).target(CleanupCriterion.EFFLUENT, TARGET).build();
         dispersionSquareMetresPerDay = Cases.DARCY_FLUX_METRES_PER_DAY / Cases.WATER_CONTENT / peclet;
         daysPerPoreVolume = Cases.WATER_CONTENT * Cases.THICKNESS_METRES / Cases.DARCY_FLUX_METRES_PER_DAY;
         baseline = new MethodOfLinesFlushing(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
-                Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, cells);
+                Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, Math.max(1, cells));
         if (method.equals("bdf2")) {
             solver = new NumericalFlushingSolver(column, grid.toBuilder().fixedStepPoreVolumes(control).build());
         }
