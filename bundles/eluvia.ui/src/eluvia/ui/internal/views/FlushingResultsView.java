@@ -30,7 +30,7 @@ import eluvia.ui.internal.fields.UnitDisplay;
 import eluvia.ui.internal.preferences.UiPreferences;
 
 /**
- * The Flushing results view's content: for every flushing design the controlling figures (pore
+ * The Flushing view's content: for every flushing design the controlling figures (pore
  * volumes by the design's criterion, calendar days, water to capture and treat), a table of every
  * contaminant under each of the three criteria with the well-mixed and plug-flow bounds, and the
  * pipeline's notes. Every number is read from the design pipeline's run.

@@ -15,7 +15,7 @@ import eluvia.ui.internal.fields.Numbers;
 import eluvia.ui.internal.fields.UnitDisplay;
 
 /**
- * The Residual curves view's content: for one flushing design, the remaining fraction against pore
+ * The Residuals view's content: for one flushing design, the remaining fraction against pore
  * volumes for every contaminant under the three criteria, and the two-region tail where the
  * contaminant has nonequilibrium parameters, with the targets and the design's pore volumes marked:
  * the design package's own chart ({@link ResultFigures#residualCurves}).
