@@ -26,8 +26,10 @@ import eluvia.site.model.Vertex;
  * @param northingMetres northing of each corner, m (copied)
  * @param grownMetres    how far the sides were moved outward from the zone's outline, m (0 for the outline itself)
  * @param basis          what the outline is, for captions
+ * @param convexHull     whether the outline is the convex hull of a footprint that is not convex
  */
-public record ZoneOutline(double[] eastingMetres, double[] northingMetres, double grownMetres, String basis) {
+public record ZoneOutline(double[] eastingMetres, double[] northingMetres, double grownMetres, String basis,
+        boolean convexHull) {
 
     /** Copies the arrays. */
     public ZoneOutline {
@@ -38,7 +40,8 @@ public record ZoneOutline(double[] eastingMetres, double[] northingMetres, doubl
     /**
      * The outline of an entered zone: its footprint polygon (counter-clockwise) when convex, else the
      * polygon's convex hull; empty when the zone has no footprint polygon (only an area: it cannot
-     * be placed on the site).
+     * be placed on the site). The excavation take-off prices this outline
+     * ({@code ExcavationTakeOff.footprintOf}), so the choice is made here only.
      */
     public static Optional<ZoneOutline> of(TreatmentZone zone) {
         int n = zone.getFootprint().size();
@@ -57,13 +60,13 @@ public record ZoneOutline(double[] eastingMetres, double[] northingMetres, doubl
         } catch (CostInputException notConvex) {
             double[][] hull = Polygons.convexHull(x, y);
             return Optional.of(new ZoneOutline(hull[0], hull[1], 0, "the convex hull of the footprint polygon of zone "
-                    + zone.getName()));
+                    + zone.getName(), true));
         }
         if (twiceSignedArea(x, y) < 0) {
             reverse(x);
             reverse(y);
         }
-        return Optional.of(new ZoneOutline(x, y, 0, "the footprint polygon of zone " + zone.getName()));
+        return Optional.of(new ZoneOutline(x, y, 0, "the footprint polygon of zone " + zone.getName(), false));
     }
 
     /**
@@ -93,7 +96,7 @@ public record ZoneOutline(double[] eastingMetres, double[] northingMetres, doubl
             x[i] = eastingMetres[i] + k * (a[0] + b[0]);
             y[i] = northingMetres[i] + k * (a[1] + b[1]);
         }
-        return new ZoneOutline(x, y, grownMetres + distanceMetres, basis);
+        return new ZoneOutline(x, y, grownMetres + distanceMetres, basis, convexHull);
     }
 
     /** The enclosed area, m2 (shoelace formula). */
@@ -138,7 +141,7 @@ public record ZoneOutline(double[] eastingMetres, double[] northingMetres, doubl
     @Override
     public boolean equals(Object o) {
         return o instanceof ZoneOutline z && Arrays.equals(z.eastingMetres, eastingMetres)
-                && Arrays.equals(z.northingMetres, northingMetres) && z.grownMetres == grownMetres && z.basis.equals(basis);
+                && Arrays.equals(z.northingMetres, northingMetres) && z.grownMetres == grownMetres && z.basis.equals(basis) && z.convexHull == convexHull;
     }
 
     @Override

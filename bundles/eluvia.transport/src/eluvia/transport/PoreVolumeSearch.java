@@ -65,14 +65,11 @@ public final class PoreVolumeSearch {
         double logTarget = Math.log(targetFraction);
         UnivariateFunction f = t -> {
             count[0]++;
-            double remaining = model.remainingFraction(criterion, t);
-            // the logarithm of the remaining fraction over the target: nearly linear in T once one
-            // exponential mode leads, so Brent's interpolation converges in a few steps
-            return (remaining > 0 ? Math.log(remaining) : LOG_SMALLEST) - logTarget;
+            return logOverTarget(model.remainingFraction(criterion, t), logTarget);
         };
         count[0]++;
         double remainingAtLimit = model.remainingFraction(criterion, maxPoreVolumes);
-        double atLimit = (remainingAtLimit > 0 ? Math.log(remainingAtLimit) : LOG_SMALLEST) - logTarget;
+        double atLimit = logOverTarget(remainingAtLimit, logTarget);
         if (remainingAtLimit > targetFraction) {
             return new PoreVolumeResult(criterion, targetFraction, false, Double.NaN, remainingAtLimit,
                     maxPoreVolumes, count[0]);
@@ -124,6 +121,15 @@ public final class PoreVolumeSearch {
         }
         return new PoreVolumeResult(criterion, targetFraction, true, root, remainingAtLimit, maxPoreVolumes,
                 count[0]);
+    }
+
+    /**
+     * ln(remaining / target): nearly linear in T once one exponential mode leads, so Brent's
+     * interpolation converges in a few steps; a remaining fraction of 0 or below counts as the
+     * smallest normal double's logarithm.
+     */
+    private static double logOverTarget(double remaining, double logTarget) {
+        return (remaining > 0 ? Math.log(remaining) : LOG_SMALLEST) - logTarget;
     }
 
     private static void checkSteps(int i, FlushingModel model, CleanupCriterion criterion, double target) {

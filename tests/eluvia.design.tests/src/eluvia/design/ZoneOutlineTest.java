@@ -55,6 +55,7 @@ final class ZoneOutlineTest {
     void aNonConvexFootprintIsTakenAsItsConvexHullAndAnAreaOnlyZoneHasNoOutline() {
         // an L-shape: the notch corner (5, 5) is not on the hull
         ZoneOutline o = ZoneOutline.of(zone(0, 0, 10, 0, 10, 5, 5, 5, 5, 10, 0, 10)).orElseThrow();
+        // hull by hand: the 10 m square less the triangle cut off between (10, 5), (5, 10) and (10, 10) (geometry)
         assertEquals(5, o.eastingMetres().length);
         assertEquals(100 - 0.5 * 5 * 5, o.areaSquareMetres(), 1e-9);
         assertTrue(o.basis().contains("convex hull"), o.basis());

@@ -3,6 +3,7 @@ package eluvia.design.internal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 import eluvia.cost.CostInputException;
 import eluvia.cost.EarthworkFactors;
@@ -17,10 +18,10 @@ import eluvia.cost.SoilSlopeClass;
 import eluvia.design.DesignInputException;
 import eluvia.design.DesignSettings;
 import eluvia.design.ExcavationResult;
+import eluvia.design.ZoneOutline;
 import eluvia.site.model.SitePackage;
 import eluvia.site.model.SoilLayer;
 import eluvia.site.model.TreatmentZone;
-import eluvia.site.model.Vertex;
 
 /**
  * Excavation take-offs of the pipeline: the site model's excavation designs (and the hot spot of a
@@ -81,25 +82,14 @@ public final class ExcavationTakeOff {
 
     /** The zone's outline as a pit footprint, with how it was obtained in {@code basis[0]}. */
     public static PitFootprint footprintOf(TreatmentZone zone, String[] basis) {
-        if (zone.getFootprint().size() >= 3) {
-            int n = zone.getFootprint().size();
-            double[] x = new double[n];
-            double[] y = new double[n];
-            for (int i = 0; i < n; i++) {
-                Vertex v = zone.getFootprint().get(i);
-                x[i] = v.getEastingMetres();
-                y[i] = v.getNorthingMetres();
-            }
-            try {
-                PitFootprint f = PitFootprint.convexPolygon(x, y);
-                basis[0] = "the zone's footprint polygon (" + n + " corners, mitred pit corners)";
-                return f;
-            } catch (CostInputException e) {
-                double[][] hull = Polygons.convexHull(x, y);
-                basis[0] = "the convex hull of the zone's footprint polygon (the outline is not convex; a pit with "
-                        + "uniformly sloped sides must enclose it)";
-                return PitFootprint.convexPolygon(hull[0], hull[1]);
-            }
+        Optional<ZoneOutline> outline = ZoneOutline.of(zone);
+        if (outline.isPresent()) {
+            ZoneOutline o = outline.get();
+            basis[0] = o.convexHull()
+                    ? "the convex hull of the zone's footprint polygon (the outline is not convex; a pit with "
+                            + "uniformly sloped sides must enclose it)"
+                    : "the zone's footprint polygon (" + zone.getFootprint().size() + " corners, mitred pit corners)";
+            return PitFootprint.convexPolygon(o.eastingMetres(), o.northingMetres());
         }
         double side = Math.sqrt(zone.getAreaSquareMetres());
         basis[0] = String.format(Locale.ROOT, "a square of the zone's area %.4g m2 (%.4g m x %.4g m; the zone has no "

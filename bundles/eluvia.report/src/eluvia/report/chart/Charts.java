@@ -140,7 +140,7 @@ public final class Charts {
         } else if (spec instanceof PlanView c) {
             chart = plan(c, text);
         } else if (spec instanceof SectionView c) {
-            chart = map(c.points(), c.outlines(), c.distanceAxis(), c.depthAxis(), true, c.valueAxis(), c.logValue(),
+            chart = section(c.points(), c.outlines(), c.distanceAxis(), c.depthAxis(), c.valueAxis(), c.logValue(),
                     c.depthMarkers(), text);
         } else {
             throw new IllegalStateException("chart kind without a drawing: " + spec.getClass().getName());
@@ -478,8 +478,9 @@ public final class Charts {
         return legend;
     }
 
-    private static JFreeChart map(List<ValuePoint> points, List<Outline> outlines, Axis xAxis, Axis yAxis,
-            boolean depthDown, Axis valueAxis, boolean logValue, List<Marker> yMarkers, UnaryOperator<String> text) {
+    /** A section: depth down, points coloured by value, outlines with their names inside, depth markers. */
+    private static JFreeChart section(List<ValuePoint> points, List<Outline> outlines, Axis xAxis, Axis yAxis,
+            Axis valueAxis, boolean logValue, List<Marker> yMarkers, UnaryOperator<String> text) {
         DefaultXYZDataset data = new DefaultXYZDataset();
         XYShapeRenderer r = new XYShapeRenderer();
         ValueScale scale = null;
@@ -503,9 +504,9 @@ public final class Charts {
             Color colour = outlineColour(o.kind());
             r.addAnnotation(new XYPolygonAnnotation(o.interleaved(), outlineStroke(o.kind()), colour,
                     o.kind() == Outline.Kind.ZONE ? withAlpha(Palette.ACCENT, 0.10) : null), Layer.BACKGROUND);
-            // in a section the grown outlines nest about one centre: each label sits inside its
-            // outline's lower edge (the edges differ) instead of at the shared centre
-            boolean atLowerEdge = depthDown && o.kind() == Outline.Kind.ENLARGED;
+            // the grown outlines nest about one centre: each label sits inside its outline's lower
+            // edge (the edges differ) instead of at the shared centre
+            boolean atLowerEdge = o.kind() == Outline.Kind.ENLARGED;
             XYTextAnnotation label = new XYTextAnnotation(text.apply(o.name()), o.labelX(),
                     atLowerEdge ? Arrays.stream(o.y()).max().orElseThrow() : o.labelY());
             if (atLowerEdge) {
@@ -521,10 +522,8 @@ public final class Charts {
         y.setAutoRangeIncludesZero(false);
         double[] e = extent(points, outlines);
         x.setRange(padded(e[0], e[1]));
-        y.setRange(depthTop(padded(e[2], e[3]), e[2], depthDown));
-        if (depthDown) {
-            y.setInverted(true);
-        }
+        y.setRange(depthTop(padded(e[2], e[3]), e[2], true));
+        y.setInverted(true);
         XYPlot plot = new XYPlot(data, x, y, r);
         for (Marker m : yMarkers) {
             plot.addRangeMarker(marker(m, text, false));

@@ -18,4 +18,20 @@ import eluvia.transport.CleanupCriterion;
 public record ExtrapolatedTarget(CleanupCriterion criterion, double targetFraction, boolean reached,
         double poreVolumes, double coarsePoreVolumes, double finePoreVolumes, double errorEstimatePoreVolumes,
         long cellSteps) {
+
+    /**
+     * Richardson extrapolation of two results of a method of second order, the fine one with half
+     * the cell size (and half the step, when there are steps): (4 fine - coarse) / 3, with
+     * |fine - coarse| / 3 as the error estimate of the fine result; not reached when either run
+     * did not reach the target.
+     */
+    static ExtrapolatedTarget ofSecondOrder(CleanupCriterion criterion, double targetFraction, boolean reached,
+            double coarsePoreVolumes, double finePoreVolumes, long cellSteps) {
+        if (!reached) {
+            return new ExtrapolatedTarget(criterion, targetFraction, false, Double.NaN, coarsePoreVolumes,
+                    finePoreVolumes, Double.NaN, cellSteps);
+        }
+        return new ExtrapolatedTarget(criterion, targetFraction, true, (4 * finePoreVolumes - coarsePoreVolumes) / 3,
+                coarsePoreVolumes, finePoreVolumes, Math.abs(finePoreVolumes - coarsePoreVolumes) / 3, cellSteps);
+    }
 }

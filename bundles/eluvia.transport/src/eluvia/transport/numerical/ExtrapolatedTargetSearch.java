@@ -46,12 +46,7 @@ public final class ExtrapolatedTargetSearch {
         TargetOutcome oa = a.outcome(criterion);
         TargetOutcome ob = b.outcome(criterion);
         long cost = (long) a.cellCount() * a.acceptedSteps() + (long) b.cellCount() * b.acceptedSteps();
-        if (!oa.reached() || !ob.reached()) {
-            return new ExtrapolatedTarget(criterion, targetFraction, false, Double.NaN, oa.poreVolumes(),
-                    ob.poreVolumes(), Double.NaN, cost);
-        }
-        double extrapolated = (4 * ob.poreVolumes() - oa.poreVolumes()) / 3;
-        return new ExtrapolatedTarget(criterion, targetFraction, true, extrapolated, oa.poreVolumes(),
-                ob.poreVolumes(), Math.abs(ob.poreVolumes() - oa.poreVolumes()) / 3, cost);
+        return ExtrapolatedTarget.ofSecondOrder(criterion, targetFraction, oa.reached() && ob.reached(), oa.poreVolumes(),
+                ob.poreVolumes(), cost);
     }
 }

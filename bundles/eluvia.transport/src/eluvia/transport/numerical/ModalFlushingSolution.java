@@ -43,6 +43,8 @@ public final class ModalFlushingSolution implements FlushingModel {
     public static final double MAXIMUM_SCALE_SPREAD = 1e8;
 
     private static final double LOG_SMALLEST = -745;
+    /** Litres per cubic metre: converts (mg/L) times m to mg/m2. */
+    private static final double LITRES_PER_CUBIC_METRE = 1000.0;
 
     private final FlushingColumn column;
     private final SolverSettings settings;
@@ -80,32 +82,7 @@ public final class ModalFlushingSolution implements FlushingModel {
         double[] cap = sys.capM();
         double[] lo = sys.lo();
         double[] up = sys.up();
-        // symmetrising scale, as logarithms first so that a wide spread is refused before it overflows
-        double[] logScale = new double[n];
-        double logMin = 0;
-        double logMax = 0;
-        for (int i = 0; i + 1 < n; i++) {
-            double right = up[i] / cap[i]; // T(i, i+1)
-            double left = lo[i + 1] / cap[i + 1]; // T(i+1, i)
-            if (!(right < 0 && left < 0)) {
-                throw new TransportInputException("coupling of cells " + (i + 1) + " and " + (i + 2),
-                        "one way only (advection without enough dispersion)",
-                        "both ways for the modal solution: use the implicit solver (NumericalFlushingSolver)");
-            }
-            logScale[i + 1] = logScale[i] + 0.5 * (Math.log(-right) - Math.log(-left));
-            logMin = Math.min(logMin, logScale[i + 1]);
-            logMax = Math.max(logMax, logScale[i + 1]);
-        }
-        if (logMax - logMin > Math.log(MAXIMUM_SCALE_SPREAD)) {
-            throw new TransportInputException("spread of the modal scale factors (dimensionless)",
-                    Math.exp(logMax - logMin), "at most " + MAXIMUM_SCALE_SPREAD
-                            + " (about P = 35 in a layer); use the implicit solver (NumericalFlushingSolver)");
-        }
-        scale = new double[n];
-        double mid = 0.5 * (logMax + logMin);
-        for (int i = 0; i < n; i++) {
-            scale[i] = Math.exp(logScale[i] - mid);
-        }
+        scale = symmetrisingScale(sys);
         double[] diag = new double[n];
         double[] off = new double[Math.max(0, n - 1)];
         for (int i = 0; i < n; i++) {
@@ -153,17 +130,66 @@ public final class ModalFlushingSolution implements FlushingModel {
         }
     }
 
-    /** Litres per cubic metre: converts (mg/L) times m to mg/m2. */
-    private static final double LITRES_PER_CUBIC_METRE = 1000.0;
+    /**
+     * The diagonal scaling that symmetrises C^-1 K (centred on 1 in the logarithm), found as
+     * logarithms first so that a wide spread is refused before it overflows.
+     *
+     * @throws TransportInputException for a face coupled one way only or a spread above
+     *         {@value #MAXIMUM_SCALE_SPREAD}
+     */
+    private static double[] symmetrisingScale(NumericalFlushingSolver.SemiDiscreteSystem sys) {
+        int n = sys.n();
+        double[] cap = sys.capM();
+        double[] lo = sys.lo();
+        double[] up = sys.up();
+        double[] logScale = new double[n];
+        double logMin = 0;
+        double logMax = 0;
+        for (int i = 0; i + 1 < n; i++) {
+            double right = up[i] / cap[i]; // T(i, i+1)
+            double left = lo[i + 1] / cap[i + 1]; // T(i+1, i)
+            if (!(right < 0 && left < 0)) {
+                throw new TransportInputException("coupling of cells " + (i + 1) + " and " + (i + 2),
+                        "one way only (advection without enough dispersion)",
+                        "both ways for the modal solution: use the implicit solver (NumericalFlushingSolver)");
+            }
+            logScale[i + 1] = logScale[i] + 0.5 * (Math.log(-right) - Math.log(-left));
+            logMin = Math.min(logMin, logScale[i + 1]);
+            logMax = Math.max(logMax, logScale[i + 1]);
+        }
+        if (logMax - logMin > Math.log(MAXIMUM_SCALE_SPREAD)) {
+            throw new TransportInputException("spread of the modal scale factors (dimensionless)",
+                    Math.exp(logMax - logMin), "at most " + MAXIMUM_SCALE_SPREAD
+                            + " (about P = 35 in a layer); use the implicit solver (NumericalFlushingSolver)");
+        }
+        double[] scale = new double[n];
+        double mid = 0.5 * (logMax + logMin);
+        for (int i = 0; i < n; i++) {
+            scale[i] = Math.exp(logScale[i] - mid);
+        }
+        return scale;
+    }
 
-    /** Whether the modal solution can take this column with these settings (see the class comment). */
+    /**
+     * Whether the modal solution can take this column with these settings (see the class
+     * comment); builds the grid and checks it, without the decomposition.
+     */
     public static boolean applies(FlushingColumn column, SolverSettings settings) {
         try {
-            of(column, settings);
+            symmetrisingScale(linearSystem(new NumericalFlushingSolver(column, settings)));
             return true;
         } catch (TransportInputException e) {
             return false;
         }
+    }
+
+    private static NumericalFlushingSolver.SemiDiscreteSystem linearSystem(NumericalFlushingSolver grid) {
+        NumericalFlushingSolver.SemiDiscreteSystem sys = grid.linearEquilibriumSystem();
+        if (sys == null) {
+            throw new TransportInputException("sorption of the column", "nonlinear or two-region",
+                    "linear equilibrium in every layer for the modal solution; use the implicit solver (NumericalFlushingSolver)");
+        }
+        return sys;
     }
 
     /**
@@ -176,13 +202,8 @@ public final class ModalFlushingSolution implements FlushingModel {
 
     /** As {@link #of(FlushingColumn, SolverSettings)} with every cell split into {@code refinement} cells. */
     static ModalFlushingSolution of(FlushingColumn column, SolverSettings settings, int refinement) {
-        NumericalFlushingSolver grid = new NumericalFlushingSolver(column, settings, refinement);
-        NumericalFlushingSolver.SemiDiscreteSystem sys = grid.linearEquilibriumSystem();
-        if (sys == null) {
-            throw new TransportInputException("sorption of the column", "nonlinear or two-region",
-                    "linear equilibrium in every layer for the modal solution; use the implicit solver (NumericalFlushingSolver)");
-        }
-        return new ModalFlushingSolution(column, settings, sys);
+        return new ModalFlushingSolution(column, settings,
+                linearSystem(new NumericalFlushingSolver(column, settings, refinement)));
     }
 
     /** Steady state K c = b by the Thomas algorithm (zero when the inflow is clean). */
@@ -386,12 +407,8 @@ public final class ModalFlushingSolution implements FlushingModel {
         PoreVolumeResult a = coarse.poreVolumesToTarget(criterion, targetFraction, maxPoreVolumes);
         PoreVolumeResult b = fine.poreVolumesToTarget(criterion, targetFraction, maxPoreVolumes);
         long cost = (long) coarse.n * coarse.n + (long) fine.n * fine.n;
-        if (!a.reachable() || !b.reachable()) {
-            return new ExtrapolatedTarget(criterion, targetFraction, false, Double.NaN, a.poreVolumes(), b.poreVolumes(),
-                    Double.NaN, cost);
-        }
-        return new ExtrapolatedTarget(criterion, targetFraction, true, (4 * b.poreVolumes() - a.poreVolumes()) / 3,
-                a.poreVolumes(), b.poreVolumes(), Math.abs(b.poreVolumes() - a.poreVolumes()) / 3, cost);
+        return ExtrapolatedTarget.ofSecondOrder(criterion, targetFraction, a.reachable() && b.reachable(), a.poreVolumes(),
+                b.poreVolumes(), cost);
     }
 
     /** The settings the grid was made with. */

@@ -42,6 +42,7 @@ final class BracketedZeroTest {
 
     @Test
     void endsThatAreZerosAreReturnedAndSameSignsRefused() {
+        // exact by construction: the given end value is 0 there
         assertEquals(1, BracketedZero.find(x -> x - 1, 1, 0, 3, 2, 1e-12, 10, false), 0);
         assertEquals(3, BracketedZero.find(x -> x - 3, 1, -2, 3, 0, 1e-12, 10, false), 0);
         assertThrows(IllegalArgumentException.class, () -> BracketedZero.find(x -> x * x + 1, -1, 2, 1, 2, 1e-12, 10, false));
@@ -61,7 +62,7 @@ final class BracketedZeroTest {
     @Test
     void tooFewEvaluationsGiveNaN() {
         // bisection-only function (a step): needs about 40 halvings for 1e-12 on [0, 1]
-        UnivariateFunction step = x -> x < 0.123456 ? 1 : -1;
+        UnivariateFunction step = x -> x < 0.123456 ? 1 : -1; // its sign changes at 0.123456 (by construction)
         assertTrue(Double.isNaN(BracketedZero.find(step, 0, 1, 1, -1, 1e-12, 5, false)));
         assertEquals(0.123456, BracketedZero.find(step, 0, 1, 1, -1, 1e-12, 200, false), 1e-11);
     }

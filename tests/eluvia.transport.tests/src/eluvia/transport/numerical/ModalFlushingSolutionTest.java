@@ -70,6 +70,7 @@ final class ModalFlushingSolutionTest {
         // the error estimate of the fine grid is of the right size (within a factor of 2)
         double estimate = x.errorEstimatePoreVolumes() / exact;
         assertTrue(estimate > fineError / 2 && estimate < 2 * fineError, "estimate " + estimate + ", actual " + fineError);
+        // the cost measure as documented: the sum of the squared cell counts
         assertEquals(8 * 8 + 16 * 16, x.cellSteps());
     }
 

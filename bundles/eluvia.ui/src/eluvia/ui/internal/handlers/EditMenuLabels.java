@@ -4,10 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.eclipse.e4.ui.model.application.MApplication;
-import org.eclipse.e4.ui.model.application.ui.MElementContainer;
-import org.eclipse.e4.ui.model.application.ui.MUIElement;
 import org.eclipse.e4.ui.model.application.ui.basic.MWindow;
 import org.eclipse.e4.ui.model.application.ui.menu.MMenuItem;
+import org.eclipse.e4.ui.workbench.modeling.EModelService;
 import org.eclipse.emf.common.command.CommandStackListener;
 
 import eluvia.ui.internal.Messages;
@@ -37,6 +36,8 @@ public final class EditMenuLabels {
     private MApplication application;
     @Inject
     private OpenDocuments documents;
+    @Inject
+    private EModelService modelService;
 
     private final CommandStackListener stackListener = e -> update();
     private final OpenDocuments.Listener activeListener = new OpenDocuments.Listener() {
@@ -90,20 +91,8 @@ public final class EditMenuLabels {
     private List<MMenuItem> items(String tag) {
         List<MMenuItem> out = new ArrayList<>();
         for (MWindow w : application.getChildren()) {
-            if (w.getMainMenu() != null) {
-                collect(w.getMainMenu(), tag, out);
-            }
+            out.addAll(modelService.findElements(w, null, MMenuItem.class, List.of(tag), EModelService.IN_MAIN_MENU));
         }
         return out;
-    }
-
-    private static void collect(MElementContainer<?> container, String tag, List<MMenuItem> out) {
-        for (Object child : container.getChildren()) {
-            if (child instanceof MMenuItem item && item.getTags().contains(tag)) {
-                out.add(item);
-            } else if (child instanceof MElementContainer<?> c && child instanceof MUIElement) {
-                collect(c, tag, out);
-            }
-        }
     }
 }
