@@ -1,7 +1,5 @@
 package eluvia.transport.numerical;
 
-import java.util.Arrays;
-
 import eluvia.transport.CleanupCriterion;
 import eluvia.transport.FlushingModel;
 import eluvia.transport.PoreVolumeResult;
@@ -42,47 +40,24 @@ public final class ModalFlushingSolution implements FlushingModel {
     /** Largest ratio of the symmetrising scale factors accepted (rounding of early-time values grows with it). */
     public static final double MAXIMUM_SCALE_SPREAD = 1e8;
 
-    private static final double LOG_SMALLEST = -745;
     /** Litres per cubic metre: converts (mg/L) times m to mg/m2. */
     private static final double LITRES_PER_CUBIC_METRE = 1000.0;
 
     private final FlushingColumn column;
     private final SolverSettings settings;
-    private final NumericalFlushingSolver.SemiDiscreteSystem system;
     private final int n;
-    private final double daysPerPoreVolume;
-    /** Mode decay rates, 1/day, ascending. */
-    private final double[] rates;
-    /** Per mode (in the order of {@link #rates}): effluent (mg/L) and stored-mass (mg/m2) coefficients. */
-    private final double[] effluentCoefficients;
-    private final double[] massCoefficients;
-    /** Per mode: V^T y0, the initial amplitude in the symmetrised variables. */
-    private final double[] amplitudes;
-    /** Symmetrising scale per cell. */
-    private final double[] scale;
-    /** Steady state per cell (mg/L) and its effluent and stored mass (mg/m2). */
-    private final double[] steady;
-    private final double steadyEffluent;
-    private final double steadyMass;
-    private final double initialMass;
-    private final double initialMaxSoil;
-    /** The symmetrised matrix, kept for the full eigenvector matrix at first use of the maximum. */
-    private final double[] symmetricDiagonal;
-    private final double[] symmetricOffDiagonal;
-    private final int[] order;
-    private volatile double[][] cellCoefficients;
+    /** The modes and the three criteria read from them. */
+    private final ModeSum modes;
 
     private ModalFlushingSolution(FlushingColumn column, SolverSettings settings,
             NumericalFlushingSolver.SemiDiscreteSystem sys) {
         this.column = column;
         this.settings = settings;
-        this.system = sys;
         this.n = sys.n();
-        this.daysPerPoreVolume = column.daysForPoreVolumes(1);
         double[] cap = sys.capM();
         double[] lo = sys.lo();
         double[] up = sys.up();
-        scale = symmetrisingScale(sys);
+        double[] scale = symmetrisingScale(sys);
         double[] diag = new double[n];
         double[] off = new double[Math.max(0, n - 1)];
         for (int i = 0; i < n; i++) {
@@ -91,36 +66,33 @@ public final class ModalFlushingSolution implements FlushingModel {
                 off[i] = -Math.sqrt((up[i] / cap[i]) * (lo[i + 1] / cap[i + 1]));
             }
         }
-        symmetricDiagonal = diag.clone();
-        symmetricOffDiagonal = off;
+        double[] symmetricDiagonal = diag.clone();
 
-        steady = steadyState(sys);
+        double[] steady = steadyState(sys);
         double[] y0 = new double[n];
         double mass0 = 0;
         double maxSoil0 = 0;
         double massSteady = 0;
         double[] massWeights = new double[n];
+        double[] soilPerWater = new double[n];
         for (int i = 0; i < n; i++) {
             y0[i] = scale[i] * (sys.initialC()[i] - steady[i]);
             double perCell = cap[i] * sys.dz()[i] * LITRES_PER_CUBIC_METRE;
             massWeights[i] = perCell / scale[i];
             mass0 += perCell * sys.initialC()[i];
             massSteady += perCell * steady[i];
-            maxSoil0 = Math.max(maxSoil0, cap[i] * sys.initialC()[i] / sys.rhoB()[i]);
+            soilPerWater[i] = cap[i] / sys.rhoB()[i];
+            maxSoil0 = Math.max(maxSoil0, soilPerWater[i] * sys.initialC()[i]);
         }
-        initialMass = mass0;
-        initialMaxSoil = maxSoil0;
-        steadyMass = massSteady;
-        steadyEffluent = steady[n - 1];
         double[] outlet = new double[n];
         outlet[n - 1] = 1;
         double[][] projections = { outlet, y0, massWeights };
         SymmetricTridiagonalEigen.decompose(diag, off, projections);
-        order = sortedOrder(diag);
-        rates = new double[n];
-        effluentCoefficients = new double[n];
-        massCoefficients = new double[n];
-        amplitudes = new double[n];
+        int[] order = ModeSum.ascendingOrder(diag);
+        double[] rates = new double[n];
+        double[] effluentCoefficients = new double[n];
+        double[] massCoefficients = new double[n];
+        double[] amplitudes = new double[n];
         for (int k = 0; k < n; k++) {
             int j = order[k];
             rates[k] = diag[j];
@@ -128,6 +100,27 @@ public final class ModalFlushingSolution implements FlushingModel {
             effluentCoefficients[k] = outlet[j] * y0[j] / scale[n - 1];
             massCoefficients[k] = massWeights[j] * y0[j];
         }
+        modes = new ModeSum(rates, effluentCoefficients, massCoefficients, steady[n - 1], massSteady,
+                sys.initialMaxC(), mass0, maxSoil0, steady, soilPerWater, column.daysForPoreVolumes(1),
+                () -> cellCoefficients(symmetricDiagonal, off, order, amplitudes, scale));
+    }
+
+    /** Rows of V over the cell scale times the amplitudes: c_i(t) = c_s,i + sum_k row_i[k] exp(-lambda_k t). */
+    private static double[][] cellCoefficients(double[] symmetricDiagonal, double[] symmetricOffDiagonal, int[] order,
+            double[] amplitudes, double[] scale) {
+        int n = symmetricDiagonal.length;
+        double[][] rows = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            rows[i][i] = 1;
+        }
+        SymmetricTridiagonalEigen.decompose(symmetricDiagonal.clone(), symmetricOffDiagonal, rows);
+        double[][] cc = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int k = 0; k < n; k++) {
+                cc[i][k] = rows[i][order[k]] * amplitudes[k] / scale[i];
+            }
+        }
+        return cc;
     }
 
     /**
@@ -231,20 +224,6 @@ public final class ModalFlushingSolution implements FlushingModel {
         return c;
     }
 
-    /** Indices of {@code values} in ascending order of value (insertion sort: n is small, often nearly sorted). */
-    private static int[] sortedOrder(double[] values) {
-        int[] out = new int[values.length];
-        for (int i = 0; i < out.length; i++) {
-            int j = i;
-            while (j > 0 && values[out[j - 1]] > values[i]) {
-                out[j] = out[j - 1];
-                j--;
-            }
-            out[j] = i;
-        }
-        return out;
-    }
-
     /** The column. */
     public FlushingColumn column() {
         return column;
@@ -257,7 +236,7 @@ public final class ModalFlushingSolution implements FlushingModel {
 
     /** Decay rates of the modes, 1/day, ascending (the slowest first). */
     public double[] modeRatesPerDay() {
-        return rates.clone();
+        return modes.ratesPerDay();
     }
 
     @Override
@@ -271,102 +250,24 @@ public final class ModalFlushingSolution implements FlushingModel {
                 + " layer(s), linear equilibrium sorption)";
     }
 
-    private static double sum(double[] coefficients, double[] rates, double t) {
-        double s = 0;
-        for (int k = 0; k < coefficients.length; k++) {
-            double exponent = -rates[k] * t;
-            if (exponent < LOG_SMALLEST) {
-                break; // rates ascend: every later term is smaller still
-            }
-            s += coefficients[k] * Math.exp(exponent);
-        }
-        return s;
-    }
-
     /** Effluent concentration (mg/L) after {@code days} days. */
     public double effluentMilligramsPerLitre(double days) {
-        TransportInputException.requireNonNegative("time (days)", days);
-        return steadyEffluent + sum(effluentCoefficients, rates, days);
+        return modes.effluentMilligramsPerLitre(days);
     }
 
     /** Solute stored in the column (mg per m2 of plan area) after {@code days} days. */
     public double storedMilligramsPerSquareMetre(double days) {
-        TransportInputException.requireNonNegative("time (days)", days);
-        return steadyMass + sum(massCoefficients, rates, days);
+        return modes.storedMilligramsPerSquareMetre(days);
     }
 
     /** Pore-water concentration of every cell (mg/L) after {@code days} days. */
     public double[] poreWaterMilligramsPerLitre(double days) {
-        TransportInputException.requireNonNegative("time (days)", days);
-        double[][] cc = cellCoefficients();
-        double[] e = new double[n];
-        for (int k = 0; k < n; k++) {
-            double exponent = -rates[k] * days;
-            e[k] = exponent < LOG_SMALLEST ? 0 : Math.exp(exponent);
-        }
-        double[] c = new double[n];
-        for (int i = 0; i < n; i++) {
-            double s = steady[i];
-            double[] row = cc[i];
-            for (int k = 0; k < n; k++) {
-                s += row[k] * e[k];
-            }
-            c[i] = s;
-        }
-        return c;
-    }
-
-    /** Rows of V over the cell scale times the amplitudes: c_i(t) = c_s,i + sum_k row_i[k] exp(-lambda_k t). */
-    private double[][] cellCoefficients() {
-        double[][] cc = cellCoefficients;
-        if (cc != null) {
-            return cc;
-        }
-        synchronized (this) {
-            if (cellCoefficients != null) {
-                return cellCoefficients;
-            }
-            double[][] rows = new double[n][n];
-            for (int i = 0; i < n; i++) {
-                rows[i][i] = 1;
-            }
-            SymmetricTridiagonalEigen.decompose(symmetricDiagonal.clone(), symmetricOffDiagonal, rows);
-            cc = new double[n][n];
-            for (int i = 0; i < n; i++) {
-                for (int k = 0; k < n; k++) {
-                    cc[i][k] = rows[i][order[k]] * amplitudes[k] / scale[i];
-                }
-            }
-            cellCoefficients = cc;
-            return cc;
-        }
+        return modes.pointMilligramsPerLitre(days);
     }
 
     @Override
     public double remainingFraction(CleanupCriterion criterion, double poreVolumes) {
-        if (criterion == null) {
-            throw new TransportInputException("cleanup criterion", null, "one of effluent, mean, max");
-        }
-        TransportInputException.requireNonNegative("pore volumes (dimensionless)", poreVolumes);
-        double days = poreVolumes * daysPerPoreVolume;
-        double f;
-        switch (criterion) {
-            case EFFLUENT:
-                f = effluentMilligramsPerLitre(days) / (system.initialMaxC() > 0 ? system.initialMaxC() : 1);
-                break;
-            case MEAN_RESIDUAL:
-                f = storedMilligramsPerSquareMetre(days) / (initialMass > 0 ? initialMass : 1);
-                break;
-            default: {
-                double[] c = poreWaterMilligramsPerLitre(days);
-                double max = 0;
-                for (int i = 0; i < n; i++) {
-                    max = Math.max(max, system.capM()[i] * c[i] / system.rhoB()[i]);
-                }
-                f = max / (initialMaxSoil > 0 ? initialMaxSoil : 1);
-            }
-        }
-        return Math.min(1, Math.max(0, f));
+        return modes.remainingFraction(criterion, poreVolumes);
     }
 
     /**
@@ -375,13 +276,7 @@ public final class ModalFlushingSolution implements FlushingModel {
      */
     @Override
     public double poreVolumeGuess(CleanupCriterion criterion, double targetFraction) {
-        double[] a = criterion == CleanupCriterion.MEAN_RESIDUAL ? massCoefficients : effluentCoefficients;
-        double ref = criterion == CleanupCriterion.MEAN_RESIDUAL ? initialMass : system.initialMaxC();
-        double lead = a[0] / (ref > 0 ? ref : 1);
-        if (!(lead > targetFraction) || !(rates[0] > 0)) {
-            return 1;
-        }
-        return Math.log(lead / targetFraction) / rates[0] / daysPerPoreVolume;
+        return modes.poreVolumeGuess(criterion, targetFraction);
     }
 
     /**
