@@ -28,6 +28,7 @@ import eluvia.transport.numerical.ModalFlushingSolution;
 import eluvia.transport.numerical.NumericalFlushingSolver;
 import eluvia.transport.numerical.SolverSettings;
 import eluvia.transport.numerical.SorptionIsotherm;
+import eluvia.transport.numerical.SpectralElementFlushingSolution;
 
 /**
  * The transport bundle's numerical solvers against the method-of-lines baseline
@@ -43,6 +44,9 @@ import eluvia.transport.numerical.SorptionIsotherm;
  * <li>{@code bdf2x N H}: implicit solver with Richardson extrapolation, N and 2N cells, steps H and H/2;</li>
  * <li>{@code modal N}: modal solution (exact in time), N cells;</li>
  * <li>{@code modalx N}: modal solution with Richardson extrapolation in space, N and 2N cells;</li>
+ * <li>{@code sem P}: spectral elements of degree P, exact in time;</li>
+ * <li>{@code molsem P TOL}: for context, the method of lines on the same spectral-element
+ * equations ({@link MethodOfLinesSpectral}), integrator relative tolerance TOL;</li>
  * <li>{@code series 0}: for context, the analytic path the product takes for an equilibrium layer
  * (finite-layer series and pore-volume search, from the layer's transport numbers; relative
  * accuracy 1e-10, so far beyond the accuracy of the case; no grid).</li>
@@ -63,10 +67,13 @@ public class EqualAccuracyBenchmark {
     private static final double MAX_PORE_VOLUMES = 1000;
 
     @Param({ "P10-1e-3 mol 18 1e-3", "P10-1e-3 bdf2 40 0.04", "P10-1e-3 bdf2x 10 0.16", "P10-1e-3 modal 18",
-        "P10-1e-3 modalx 8", "P10-1e-3 series 0",
+        "P10-1e-3 modalx 8", "P10-1e-3 sem 4", "P10-1e-3 molsem 4 1e-4", "P10-1e-3 series 0",
         "P1-1e-3 mol 12 1e-2", "P1-1e-3 bdf2 28 0.08", "P1-1e-3 bdf2 16 0.08", "P1-1e-3 modal 12", "P1-1e-3 modalx 6",
-        "P10-3e-5 mol 128 1e-4", "P10-3e-5 bdf2x 18 0.04", "P10-3e-5 modalx 12",
-        "P1-3e-5 mol 56 1e-2", "P1-3e-5 bdf2x 10 0.16", "P1-3e-5 bdf2x 6 0.16", "P1-3e-5 modalx 6" })
+        "P1-1e-3 sem 2", "P1-1e-3 molsem 2 1e-4",
+        "P10-3e-5 mol 128 1e-4", "P10-3e-5 bdf2x 18 0.04", "P10-3e-5 modalx 12", "P10-3e-5 sem 4",
+        "P10-3e-5 molsem 4 1e-5",
+        "P1-3e-5 mol 56 1e-2", "P1-3e-5 bdf2x 10 0.16", "P1-3e-5 bdf2x 6 0.16", "P1-3e-5 modalx 6", "P1-3e-5 sem 3",
+        "P1-3e-5 molsem 5 1e-5" })
     public String setting;
 
     private String method;
@@ -77,6 +84,7 @@ public class EqualAccuracyBenchmark {
     private NumericalFlushingSolver solver;
     private FlushingRunRequest request;
     private MethodOfLinesFlushing baseline;
+    private MethodOfLinesSpectral spectralLines;
     private double daysPerPoreVolume;
     private double peclet;
     private double dispersionSquareMetresPerDay;
@@ -97,6 +105,10 @@ public class EqualAccuracyBenchmark {
         daysPerPoreVolume = Cases.WATER_CONTENT * Cases.THICKNESS_METRES / Cases.DARCY_FLUX_METRES_PER_DAY;
         baseline = new MethodOfLinesFlushing(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
                 Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, Math.max(1, cells));
+        if (method.equals("molsem")) {
+            spectralLines = new MethodOfLinesSpectral(Cases.THICKNESS_METRES, Cases.WATER_CONTENT, RETARDATION,
+                    Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, cells);
+        }
         if (method.equals("bdf2")) {
             solver = new NumericalFlushingSolver(column, grid.toBuilder().fixedStepPoreVolumes(control).build());
         }
@@ -127,6 +139,12 @@ public class EqualAccuracyBenchmark {
                         TARGET, MAX_PORE_VOLUMES).poreVolumes();
             case "series":
                 return series();
+            case "molsem":
+                return spectralLines.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, control / 10)
+                        / daysPerPoreVolume;
+            case "sem":
+                return SpectralElementFlushingSolution.of(column, cells + 1)
+                        .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
             case "modal":
             case "modalx": {
                 SolverSettings finer = SolverSettings.builder().minimumCellsPerLayer(EqualAccuracyScan.nextGrid(cells))
@@ -162,6 +180,12 @@ public class EqualAccuracyBenchmark {
                         TARGET, MAX_PORE_VOLUMES).poreVolumes();
             case "series":
                 return series();
+            case "molsem":
+                return spectralLines.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPoreVolume, control)
+                        / daysPerPoreVolume;
+            case "sem":
+                return SpectralElementFlushingSolution.of(column, cells)
+                        .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();
             case "modal":
                 return ModalFlushingSolution.of(column, grid)
                         .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes();

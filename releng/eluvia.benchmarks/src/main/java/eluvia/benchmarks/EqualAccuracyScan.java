@@ -17,6 +17,7 @@ import eluvia.transport.numerical.ModalFlushingSolution;
 import eluvia.transport.numerical.NumericalFlushingSolver;
 import eluvia.transport.numerical.SolverSettings;
 import eluvia.transport.numerical.SorptionIsotherm;
+import eluvia.transport.numerical.SpectralElementFlushingSolution;
 
 /**
  * Chooses the settings of {@link EqualAccuracyBenchmark}: for each case and method, the cheapest
@@ -24,7 +25,8 @@ import eluvia.transport.numerical.SorptionIsotherm;
  * refinement in the method's own accuracy control are both within the accuracy of the exact
  * finite-layer series (Brenner 1962): for the method of lines the integrator tolerance divided
  * by 10; for the implicit solver half the fixed step, or the adaptive tolerance divided by 10;
- * for the modal solution, which has no time control, the next finer grid of the scan. This
+ * for the modal solution, which has no time control, the next finer grid of the scan; for the
+ * spectral elements (no time control either) the next degree. This
  * keeps a lucky cancellation of space and time errors (seen for the method of lines at 14
  * cells, tolerance 1e-3, P = 10: 6e-5 with the tolerance, 1.7e-3 with a tenth of it) from
  * passing as accuracy. Times here are quick single-thread loops for ranking only; the reported
@@ -166,8 +168,34 @@ public final class EqualAccuracyScan {
                 found.add(new Candidate("modal", "Richardson " + n + " and " + 2 * n + " cells", x, xr, t));
             }
         }
+        // spectral elements (refinement: the next degree)
+        for (int p = SpectralElementFlushingSolution.MINIMUM_DEGREE; p < 16; p++) {
+            int degree = p;
+            double e = SpectralElementFlushingSolution.of(column, degree).poreVolumesToTarget(CleanupCriterion.EFFLUENT,
+                    TARGET, MAX_PORE_VOLUMES).poreVolumes() / expected - 1;
+            double r = SpectralElementFlushingSolution.of(column, degree + 1).poreVolumesToTarget(CleanupCriterion.EFFLUENT,
+                    TARGET, MAX_PORE_VOLUMES).poreVolumes() / expected - 1;
+            if (Math.abs(e) <= accuracy && Math.abs(r) <= accuracy) {
+                double t = micros(() -> SpectralElementFlushingSolution.of(column, degree)
+                        .poreVolumesToTarget(CleanupCriterion.EFFLUENT, TARGET, MAX_PORE_VOLUMES).poreVolumes());
+                found.add(new Candidate("spectral", "degree " + degree, e, r, t));
+            }
+            // context: the method of lines on the same spectral-element equations
+            MethodOfLinesSpectral lines = new MethodOfLinesSpectral(Cases.THICKNESS_METRES, Cases.WATER_CONTENT,
+                    RETARDATION, Cases.DARCY_FLUX_METRES_PER_DAY, 1 / peclet, degree);
+            for (double tol : tolerances) {
+                double le = lines.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPv, tol) / daysPerPv / expected - 1;
+                double lr = lines.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPv, tol / 10) / daysPerPv / expected
+                        - 1;
+                if (Math.abs(le) <= accuracy && Math.abs(lr) <= accuracy) {
+                    double t = micros(() -> lines.daysToEffluentTarget(TARGET, MAX_PORE_VOLUMES * daysPerPv, tol));
+                    found.add(new Candidate("lines on spectral", "degree " + degree + ", rel. tol. " + tol, le, lr, t));
+                    break;
+                }
+            }
+        }
         System.out.printf(Locale.ROOT, "%n== P = %g, accuracy %.0e (exact %.8f pore volumes)%n", peclet, accuracy, expected);
-        for (String method : new String[] { "method of lines", "implicit", "modal" }) {
+        for (String method : new String[] { "method of lines", "implicit", "modal", "spectral", "lines on spectral" }) {
             found.stream().filter(c -> c.method().equals(method)).sorted(Comparator.comparingDouble(Candidate::micros))
                     .limit(3).forEach(c -> System.out.printf(Locale.ROOT, "%-16s %-48s error %+.2e refined %+.2e  %9.1f us%n",
                             c.method(), c.settings(), c.error(), c.refinedError(), c.micros()));
