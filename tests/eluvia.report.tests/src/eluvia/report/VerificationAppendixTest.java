@@ -21,8 +21,9 @@ final class VerificationAppendixTest {
         VerificationAppendix.Outcome o = VerificationAppendix.runStandard();
         assertTrue(o.passed(), () -> "failures: " + o.failures());
         // 4 semi-infinite, 3 batch flush, 2 tortuosity, retardation, P/A, two limits, numerical against Brenner,
-        // modal against Brenner, numerical against modal (time error alone)
-        assertEquals(16, o.rows().size());
+        // modal against Brenner, numerical against modal (time error alone), spectral elements against Brenner,
+        // numerical against spectral elements for two layers
+        assertEquals(18, o.rows().size());
         for (VerificationAppendix.Row r : o.rows()) {
             assertFalse(r.verificationCase().source().isBlank(), r.verificationCase().name());
             assertTrue(Math.abs(r.difference()) <= r.verificationCase().tolerance(), r.verificationCase().name());

@@ -14,6 +14,7 @@ import eluvia.transport.FlushingModels;
 import eluvia.transport.FlushingScreening;
 import eluvia.transport.LayerFlushingInput;
 import eluvia.transport.LayerTransport;
+import eluvia.transport.PoreVolumeResult;
 import eluvia.transport.ReboundEstimate;
 import eluvia.transport.TwoRegionParameters;
 import eluvia.transport.numerical.FlushingColumn;
@@ -24,6 +25,7 @@ import eluvia.transport.numerical.NumericalFlushingSolver;
 import eluvia.transport.numerical.SoilLayer;
 import eluvia.transport.numerical.SolverSettings;
 import eluvia.transport.numerical.SorptionIsotherm;
+import eluvia.transport.numerical.SpectralElementFlushingSolution;
 import eluvia.transport.numerical.TargetOutcome;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -34,19 +36,21 @@ import picocli.CommandLine.ParentCommand;
  *
  * <p>Models: {@code equilibrium} (finite layer, Brenner 1962), {@code two-region} (van Genuchten and
  * Wierenga 1976, exact in the Laplace domain), {@code numerical} (finite volumes: layered profiles
- * from {@code --layers}, Freundlich or Langmuir sorption).
+ * from {@code --layers}, Freundlich or Langmuir sorption), {@code spectral} (spectral elements, exact
+ * in time: layered profiles with linear equilibrium sorption).
  */
 @Command(name = "flush", mixinStandardHelpOptions = true, sortOptions = false,
         description = { "Pore volumes of clean water to flush a layer down to a target fraction of its initial concentration.",
                 "Models: equilibrium (finite layer, flux inlet, zero-gradient outlet; Brenner 1962), two-region",
-                "(nonequilibrium; van Genuchten and Wierenga 1976) and numerical (finite volumes; layered, nonlinear sorption).",
+                "(nonequilibrium; van Genuchten and Wierenga 1976), numerical (finite volumes; layered, nonlinear sorption)",
+                "and spectral (spectral elements exact in time; layered, linear equilibrium sorption; Patera 1984).",
                 "Results are planning estimates; flushed water must be captured and treated." })
 final class FlushCommand implements Callable<Integer> {
 
     @ParentCommand
     EluviaCommand parent;
 
-    @Option(names = "--model", defaultValue = "equilibrium", paramLabel = "WORD", description = "equilibrium, two-region or numerical (default ${DEFAULT-VALUE})")
+    @Option(names = "--model", defaultValue = "equilibrium", paramLabel = "WORD", description = "equilibrium, two-region, numerical or spectral (default ${DEFAULT-VALUE})")
     String model;
 
     @Option(names = "--thickness-m", paramLabel = "M", description = "thickness of the treated layer, m (> 0)")
@@ -67,7 +71,7 @@ final class FlushCommand implements Callable<Integer> {
     @Option(names = "--dispersivity-m", paramLabel = "M", description = "longitudinal dispersivity, m (>= 0)")
     Double dispersivityMetres;
 
-    @Option(names = "--layers", paramLabel = "FILE", description = "CSV of layers top to bottom (with --model numerical; replaces the single-layer options); see README")
+    @Option(names = "--layers", paramLabel = "FILE", description = "CSV of layers top to bottom (with --model numerical or spectral; replaces the single-layer options); see README")
     Path layersFile;
 
     @Option(names = "--darcy-flux-m-d", required = true, paramLabel = "M_D", description = "Darcy flux of flushing water, m/d (> 0)")
@@ -118,8 +122,8 @@ final class FlushCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         String m = model.toLowerCase(Locale.ROOT);
-        if (!List.of("equilibrium", "two-region", "numerical").contains(m)) {
-            throw new OptionCheck("--model", model, "equilibrium, two-region or numerical");
+        if (!List.of("equilibrium", "two-region", "numerical", "spectral").contains(m)) {
+            throw new OptionCheck("--model", model, "equilibrium, two-region, numerical or spectral");
         }
         CleanupCriterion c = criterionOf(criterion);
         OptionalDouble area = areaSquareMetres == null ? OptionalDouble.empty()
@@ -133,13 +137,15 @@ final class FlushCommand implements Callable<Integer> {
             throw new OptionCheck(beta != null ? "--beta" : "--omega", beta != null ? beta : omega, "only with --model two-region");
         }
         boolean nonlinear = freundlichKf != null || freundlichN != null || langmuirSmax != null || langmuirK != null;
-        if (!m.equals("numerical") && (nonlinear || layersFile != null)) {
-            throw new OptionCheck(layersFile != null ? "--layers" : "the Freundlich and Langmuir options", "given",
-                    "only with --model numerical");
+        if (!m.equals("numerical") && nonlinear) {
+            throw new OptionCheck("the Freundlich and Langmuir options", "given", "only with --model numerical");
+        }
+        if (!m.equals("numerical") && !m.equals("spectral") && layersFile != null) {
+            throw new OptionCheck("--layers", "given", "only with --model numerical or spectral");
         }
         PrintWriter out = parent.spec.commandLine().getOut();
-        if (m.equals("numerical")) {
-            return numerical(c, area, nonlinear, out);
+        if (m.equals("numerical") || m.equals("spectral")) {
+            return layered(m.equals("spectral"), c, area, nonlinear, out);
         }
         LayerFlushingInput input = checkedInput(kdOption());
         FlushingEstimate e;
@@ -179,7 +185,7 @@ final class FlushCommand implements Callable<Integer> {
 
     private static double required(String option, Double value) {
         if (value == null) {
-            throw new OptionCheck(option, "missing", "required unless --layers is given with --model numerical");
+            throw new OptionCheck(option, "missing", "required unless --layers is given with --model numerical or spectral");
         }
         return value;
     }
@@ -214,7 +220,8 @@ final class FlushCommand implements Callable<Integer> {
         return SorptionIsotherm.linear(kdOption());
     }
 
-    private int numerical(CleanupCriterion c, OptionalDouble area, boolean nonlinear, PrintWriter out) {
+    /** {@code --model numerical} (finite volumes) or {@code --model spectral} (spectral elements) on the layers. */
+    private int layered(boolean spectral, CleanupCriterion c, OptionalDouble area, boolean nonlinear, PrintWriter out) {
         List<SoilLayer> layers;
         if (layersFile != null) {
             layers = LayersCsv.read(parent.environment.workingDirectory().resolve(layersFile), diffusionSquareMetresPerSecond,
@@ -228,6 +235,10 @@ final class FlushCommand implements Callable<Integer> {
                     .decayOnSolidsPerDay(decayPerDay).build());
         }
         boolean anyNonlinear = layers.stream().anyMatch(x -> !x.isotherm().isLinear());
+        if (spectral && (anyNonlinear || layers.stream().anyMatch(SoilLayer::isTwoRegion))) {
+            throw new OptionCheck("--model", model,
+                    "numerical for nonlinear or two-region layers; spectral takes linear equilibrium layers only");
+        }
         double initial;
         if (initialSoilMilligramsPerKg != null) {
             initial = OptionCheck.positive("--initial-soil-mg-kg", initialSoilMilligramsPerKg);
@@ -239,16 +250,42 @@ final class FlushCommand implements Callable<Integer> {
         double[] soil = new double[layers.size()];
         java.util.Arrays.fill(soil, initial);
         FlushingColumn column = new FlushingColumn(layers, darcyFluxMetresPerDay, 0, InitialCondition.soilPerLayer(soil));
-        FlushingRunResult r = new NumericalFlushingSolver(column, SolverSettings.defaults())
-                .run(FlushingRunRequest.upToPoreVolumes(maxPoreVolumes).target(c, targetFraction).build());
-        TargetOutcome o = r.outcome(c);
+        boolean reached;
+        double poreVolumes;
+        double remaining;
+        String text;
+        FlushingRunResult run = null;
+        SpectralElementFlushingSolution modes = null;
+        double degreeCheck = Double.NaN;
+        if (spectral) {
+            modes = SpectralElementFlushingSolution.of(column);
+            PoreVolumeResult p = modes.poreVolumesToTarget(c, targetFraction, maxPoreVolumes);
+            reached = p.reachable();
+            poreVolumes = p.poreVolumes();
+            remaining = p.remainingAtLimit();
+            // the same column two degrees higher: its difference estimates the error of the answer
+            PoreVolumeResult check = SpectralElementFlushingSolution.of(column, SpectralElementFlushingSolution.DEFAULT_DEGREE + 2)
+                    .poreVolumesToTarget(c, targetFraction, maxPoreVolumes);
+            degreeCheck = reached && check.reachable() ? Math.abs(check.poreVolumes() / poreVolumes - 1) : Double.NaN;
+            text = reached ? String.format(Locale.ROOT, "%s (%.4g days)", p.describe(), column.daysForPoreVolumes(poreVolumes))
+                    : p.describe();
+        } else {
+            run = new NumericalFlushingSolver(column, SolverSettings.defaults())
+                    .run(FlushingRunRequest.upToPoreVolumes(maxPoreVolumes).target(c, targetFraction).build());
+            TargetOutcome o = run.outcome(c);
+            reached = o.reached();
+            poreVolumes = o.poreVolumes();
+            remaining = o.finalFraction();
+            text = o.message();
+        }
+        double days = reached ? column.daysForPoreVolumes(poreVolumes) : Double.NaN;
         double waterPerArea = column.poreVolumeMetres();
         Json j = new Json().beginObject();
-        j.field("model", "numerical").field("criterion", c.word()).field("targetFraction", targetFraction)
-                .field("reachable", o.reached()).field("poreVolumes", o.poreVolumes()).field("durationDays", o.days());
+        j.field("model", spectral ? "spectral" : "numerical").field("criterion", c.word()).field("targetFraction", targetFraction)
+                .field("reachable", reached).field("poreVolumes", poreVolumes).field("durationDays", days);
         j.name("waterVolumeM3");
-        if (area.isPresent() && o.reached()) {
-            j.value(o.poreVolumes() * waterPerArea * area.getAsDouble());
+        if (area.isPresent() && reached) {
+            j.value(poreVolumes * waterPerArea * area.getAsDouble());
         } else {
             j.nullValue();
         }
@@ -256,7 +293,7 @@ final class FlushCommand implements Callable<Integer> {
         double theta = 0;
         for (SoilLayer x : layers) {
             double slope = x.isotherm().isLinear() ? x.isotherm().slopeLitresPerKilogram(0)
-                    : x.isotherm().sorbedMilligramsPerKilogram(r.initialPoreWaterMilligramsPerLitre()) / r.initialPoreWaterMilligramsPerLitre();
+                    : x.isotherm().sorbedMilligramsPerKilogram(run.initialPoreWaterMilligramsPerLitre()) / run.initialPoreWaterMilligramsPerLitre();
             rTheta += x.thicknessMetres() * (x.waterContent() + x.bulkDensityKilogramsPerCubicMetre() / 1000 * slope);
             theta += x.thicknessMetres() * x.waterContent();
         }
@@ -266,15 +303,24 @@ final class FlushCommand implements Callable<Integer> {
                         : "water-weighted over the layers");
         j.field("peclet", Double.NaN);
         j.field("wellMixedPoreVolumes", -retardation * Math.log(targetFraction));
-        j.field("onePoreVolumeM3PerM2", waterPerArea).field("layers", layers.size()).field("cells", r.cellCount())
-                .field("massBalanceError", r.massBalance().relativeError()).field("remainingAtLimit", o.finalFraction())
-                .field("maxPoreVolumes", maxPoreVolumes);
-        String text = o.message();
+        j.field("onePoreVolumeM3PerM2", waterPerArea).field("layers", layers.size());
+        if (spectral) {
+            j.field("degree", modes.degree()).field("points", modes.pointCount())
+                    .field("degreeCheckRelativeDifference", degreeCheck);
+        } else {
+            j.field("cells", run.cellCount()).field("massBalanceError", run.massBalance().relativeError());
+        }
+        j.field("remainingAtLimit", remaining).field("maxPoreVolumes", maxPoreVolumes);
         if (json) {
             out.print(j.endObject().toString());
         } else {
             out.println(text);
-            out.printf(Locale.ROOT, "mass balance relative error    %.3g%n", r.massBalance().relativeError());
+            if (spectral) {
+                out.printf(Locale.ROOT, "degree %d against degree %d: relative difference %.2g%n", modes.degree(),
+                        modes.degree() + 2, degreeCheck);
+            } else {
+                out.printf(Locale.ROOT, "mass balance relative error    %.3g%n", run.massBalance().relativeError());
+            }
             out.println("CAUTION: planning estimate only; flushed water must be captured and treated; a licensed engineer decides.");
         }
         return EluviaCommand.OK;

@@ -195,6 +195,42 @@ final class CommandLineTest {
     }
 
     @Test
+    void spectralElementsAgreeWithTheSeriesAndWithFiniteVolumesOnLayers(@TempDir Path dir) throws IOException {
+        // one layer: the Brenner (1962) series; spectral elements converge to it exponentially in the degree
+        InProcess.Result series = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.2", "--criterion", "mean"));
+        InProcess.Result sem = run(dir, flushArgs("--model", "spectral", "--thickness-m", "1", "--kd-l-kg", "0.2",
+                "--criterion", "mean"));
+        assertEquals(0, sem.code(), sem.err());
+        double a = number(series.out(), "poreVolumes");
+        assertEquals(a, number(sem.out(), "poreVolumes"), a * 1e-7);
+        assertTrue(number(sem.out(), "degreeCheckRelativeDifference") < 1e-7, sem.out());
+        assertTrue(sem.out().contains("\"model\": \"spectral\""), sem.out());
+        // two different layers, which no series describes: the finite-volume solver at its defaults (0.5 %)
+        Files.writeString(dir.resolve("layers.csv"), "thickness_m,water_content,porosity,bulk_density_kg_m3,kd_l_kg,dispersivity_m\n"
+                + "0.6,0.3,0.35,1600,0.4,0.05\n0.9,0.25,0.3,1700,0.1,0.15\n");
+        InProcess.Result fv = run(dir, flushArgs("--model", "numerical", "--layers", "layers.csv", "--criterion", "max"));
+        InProcess.Result layered = run(dir, flushArgs("--model", "spectral", "--layers", "layers.csv", "--criterion", "max"));
+        assertEquals(0, layered.code(), layered.err());
+        double b = number(layered.out(), "poreVolumes");
+        assertEquals(b, number(fv.out(), "poreVolumes"), b * 0.005);
+        // text output states the answer, the degree check and the caution
+        InProcess.Result text = run(dir, "flush", "--model", "spectral", "--layers", "layers.csv", "--darcy-flux-m-d", "0.1",
+                "--target-fraction", "0.01");
+        assertEquals(0, text.code(), text.err());
+        assertTrue(text.out().contains("degree 8 against degree 10"), text.out());
+        assertTrue(text.out().contains("licensed engineer"), text.out());
+    }
+
+    @Test
+    void spectralElementsRefuseNonlinearLayersNamingTheFix(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("layers.csv"), "thickness_m,water_content,porosity,bulk_density_kg_m3,freundlich_kf,freundlich_n,dispersivity_m\n"
+                + "1,0.3,0.35,1600,0.5,0.8,0.1\n");
+        InProcess.Result r = run(dir, flushArgs("--model", "spectral", "--layers", "layers.csv", "--initial-soil-mg-kg", "10"));
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--model") && r.err().contains("numerical"), r.err());
+    }
+
+    @Test
     void twoRegionWithBetaOneIsEquilibriumAndReportsRebound(@TempDir Path dir) {
         // beta = 1 puts all sorption capacity in equilibrium (van Genuchten and Wierenga 1976): the equilibrium result
         InProcess.Result eq = run(dir, flushArgs("--thickness-m", "1", "--kd-l-kg", "0.5"));
