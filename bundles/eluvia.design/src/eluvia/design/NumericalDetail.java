@@ -14,9 +14,11 @@ import eluvia.transport.numerical.MassBalance;
  * @param massBalance solute bookkeeping, mg per m2 of plan area
  * @param isotherm the isotherm used, in words
  * @param nonequilibrium how nonequilibrium entered the layers, in words
+ * @param spectralCheck the independent spectral-element solution of the same profile, or why there is none
  */
 public record NumericalDetail(int layerCount, int cellCount, int acceptedSteps, int rejectedSteps, double stepTolerance,
-        double maximumCellSizeMetres, MassBalance massBalance, String isotherm, String nonequilibrium) {
+        double maximumCellSizeMetres, MassBalance massBalance, String isotherm, String nonequilibrium,
+        SpectralCheck spectralCheck) {
 
     /** The mass-balance error: discrepancy over the larger side of the balance (dimensionless). */
     public double massBalanceRelativeError() {

@@ -34,6 +34,7 @@ import eluvia.design.ExcavationResult;
 import eluvia.design.FlushingDesignResult;
 import eluvia.design.MethodEstimate;
 import eluvia.design.NumericalDetail;
+import eluvia.design.SpectralCheck;
 import eluvia.design.TwoRegionDetail;
 import eluvia.design.ZoneAnalysis;
 import eluvia.design.ZoneEnlargement;
@@ -261,6 +262,19 @@ public final class ResultsJson {
                 .field("outflowMgM2", m.outflowMilligramsPerSquareMetre())
                 .field("decayedMgM2", m.decayedMilligramsPerSquareMetre())
                 .field("finalStoredMgM2", m.finalStoredMilligramsPerSquareMetre()).endObject();
+        SpectralCheck s = n.spectralCheck();
+        j.name("spectralCheck").beginObject().field("available", s.available())
+                .field("unavailableReason", s.unavailableReason()).field("degree", s.degree())
+                .field("pointCount", s.pointCount());
+        j.name("byCriterion").beginObject();
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            PoreVolumeResult r = s.byCriterion().get(k);
+            if (r != null) {
+                j.name(k.word()).beginObject().field("reachable", r.reachable()).field("poreVolumes", r.poreVolumes())
+                        .endObject();
+            }
+        }
+        j.endObject().endObject();
         j.endObject();
     }
 

@@ -44,6 +44,14 @@ final class SolutionMethodTest {
         // the finite-volume bookkeeping closes to round-off (MassBalance documents it)
         assertTrue(c.numerical().massBalanceRelativeError() < 1e-9, "mass balance " + c.numerical().massBalanceRelativeError());
         assertEquals(1, c.numerical().layerCount());
+        // the run's independent spectral-element check meets the same Brenner (1962) series to 1e-7
+        SpectralCheck check = c.numerical().spectralCheck();
+        assertTrue(check.available(), check.unavailableReason());
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            double exact = c.estimate(k).result().poreVolumes();
+            assertEquals(exact, check.byCriterion().get(k).poreVolumes(), 1e-7 * exact, k.word());
+        }
+        assertTrue(numerical.description().contains("independent check by spectral elements"), numerical.description());
     }
 
     @Test
@@ -61,6 +69,38 @@ final class SolutionMethodTest {
                 .poreVolumes();
         assertTrue(pv < wellMixed, pv + " below the well-mixed " + wellMixed);
         assertTrue(c.numerical().massBalanceRelativeError() < 1e-9, "mass balance " + c.numerical().massBalanceRelativeError());
+        // and the exact check no series gives for two layers: the spectral-element solution of the same
+        // profile (a different discretisation, exact in time); the solver documents 2e-4 to 5.5e-4 at its
+        // defaults and the design's grid is finer, so 1e-3
+        SpectralCheck check = c.numerical().spectralCheck();
+        assertTrue(check.available(), check.unavailableReason());
+        MethodEstimate fv = c.method(FlushingMethod.NUMERICAL).orElseThrow();
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            double d = check.relativeDifference(k, fv.result(k));
+            assertTrue(Math.abs(d) < 1e-3, k.word() + ": " + d);
+        }
+    }
+
+    @Test
+    void aCoarseNumericalRunIsFlaggedByItsSpectralCheck() {
+        // the coarsest grid and loosest tolerance the validator allows (10 cells, 1e-2) on the layered profile:
+        // the note appears exactly when a criterion differs from the check by more than 1 %
+        Project p = TestProjects.singleLayer(0.2, 1, ComplianceCriterion.MEAN_RESIDUAL);
+        p.getSite().getLayers().get(0).setBottomDepthMetres(1);
+        p.getSite().getLayers().add(TestProjects.layer("clay", 1, 2, 1700, 0.40, 0.35, 0.010, 0.05, 0.1));
+        p.getFlushingDesigns().get(0).setSolutionMethod(SolutionMethod.NUMERICAL);
+        p.getFlushingDesigns().get(0).setNumericalCellCount(10);
+        p.getFlushingDesigns().get(0).setNumericalRelativeTolerance(1e-2);
+        DesignRun run = DesignPipeline.run(p, FAST, DesignProgress.NONE);
+        ContaminantFlushing c = run.flushing().get(0).contaminants().get(0);
+        MethodEstimate fv = c.method(FlushingMethod.NUMERICAL).orElseThrow();
+        double largest = 0;
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            largest = Math.max(largest, Math.abs(c.numerical().spectralCheck().relativeDifference(k, fv.result(k))));
+        }
+        boolean noted = run.notes().stream().anyMatch(n -> n.contains("independent spectral-element check"));
+        assertEquals(largest > SpectralCheck.NOTE_ABOVE_RELATIVE_DIFFERENCE, noted, "largest difference " + largest);
+        assertTrue(largest > 1e-4, "a coarse run differs visibly from the exact-in-time check: " + largest);
     }
 
     @Test

@@ -14,6 +14,7 @@ import eluvia.design.EffectiveLayer;
 import eluvia.design.FlushingMethod;
 import eluvia.design.MethodEstimate;
 import eluvia.design.NumericalDetail;
+import eluvia.design.SpectralCheck;
 import eluvia.design.TwoRegionDetail;
 import eluvia.site.derived.Dispersivities;
 import eluvia.site.model.Contaminant;
@@ -43,6 +44,7 @@ import eluvia.transport.numerical.InitialCondition;
 import eluvia.transport.numerical.NumericalFlushingSolver;
 import eluvia.transport.numerical.SolverSettings;
 import eluvia.transport.numerical.SorptionIsotherm;
+import eluvia.transport.numerical.SpectralElementFlushingSolution;
 import eluvia.transport.numerical.TargetOutcome;
 
 /**
@@ -147,8 +149,10 @@ public final class FlushingSolutions {
                 notes.add(c.getName() + ": the numerical solution is not available: " + why + ".");
             } else {
                 Object[] out = runNumerical(slices, design, c, entry, initialMgPerKg, target, progress);
-                methods.add((MethodEstimate) out[0]);
+                MethodEstimate fv = (MethodEstimate) out[0];
+                methods.add(fv);
                 numerical = (NumericalDetail) out[1];
+                noteSpectralCheck(c.getName(), fv, numerical.spectralCheck(), notes);
             }
         } else {
             methods.add(MethodEstimate.notAvailable(FlushingMethod.NUMERICAL,
@@ -315,6 +319,43 @@ public final class FlushingSolutions {
         }
     }
 
+    /**
+     * The spectral-element solution of the numerical run's column (exact in time, a different
+     * discretisation), for every criterion; not available for nonlinear or two-region layers or a
+     * profile outside its range, with the reason.
+     */
+    static SpectralCheck spectralCheck(FlushingColumn column, double target, double maxPoreVolumes) {
+        for (eluvia.transport.numerical.SoilLayer l : column.layers()) {
+            if (!l.isotherm().isLinear() || l.isTwoRegion()) {
+                return SpectralCheck.notAvailable("the spectral-element check takes linear equilibrium layers only");
+            }
+        }
+        SpectralElementFlushingSolution s;
+        try {
+            s = SpectralElementFlushingSolution.of(column);
+        } catch (TransportInputException e) {
+            return SpectralCheck.notAvailable("the spectral-element check cannot take this profile: " + e.getMessage());
+        }
+        Map<CleanupCriterion, PoreVolumeResult> byCriterion = new EnumMap<>(CleanupCriterion.class);
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            byCriterion.put(k, s.poreVolumesToTarget(k, target, maxPoreVolumes));
+        }
+        return new SpectralCheck(true, "", s.degree(), s.pointCount(), byCriterion);
+    }
+
+    /** A design note when the numerical run and its spectral-element check differ by more than 1 %. */
+    private static void noteSpectralCheck(String contaminant, MethodEstimate numerical, SpectralCheck check,
+            List<String> notes) {
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            double d = check.relativeDifference(k, numerical.result(k));
+            if (Math.abs(d) > SpectralCheck.NOTE_ABOVE_RELATIVE_DIFFERENCE) {
+                notes.add(String.format(Locale.ROOT, "%s: the numerical run and its independent spectral-element check "
+                        + "differ by %.2g %% in pore volumes to the %s target; raise the design's numerical cell count or "
+                        + "tighten its relative tolerance until they agree.", contaminant, 100 * d, k.word()));
+            }
+        }
+    }
+
     /** The numerical run: returns the method estimate and the detail. */
     private static Object[] runNumerical(List<LayerCombination.Slice> slices, FlushingDesign design, Contaminant c,
             NonequilibriumEntry entry, double initialMgPerKg, double target, RunProgress progress) {
@@ -377,12 +418,25 @@ public final class FlushingSolutions {
         }
         String iso = layers.get(0).isotherm().describe() + (layers.size() > 1 && (c.getIsotherm() == null
                 || c.getIsotherm() == eluvia.site.model.SorptionIsotherm.LINEAR) ? " (Kd per layer)" : "");
+        SpectralCheck check = spectralCheck(column, target, maxPv);
+        String checked = "";
+        if (check.available()) {
+            double largest = 0;
+            for (CleanupCriterion k : CleanupCriterion.values()) {
+                double d = check.relativeDifference(k, byCriterion.get(k));
+                if (Math.abs(d) > Math.abs(largest)) {
+                    largest = d;
+                }
+            }
+            checked = String.format(Locale.ROOT, "; independent check by spectral elements (degree %d, exact in time): "
+                    + "largest difference %.1e", check.degree(), largest);
+        }
         String description = String.format(Locale.ROOT,
                 "numerical finite-volume solution over %d layers (%d cells, BDF2, step tolerance %s), %s, mass-balance "
-                        + "error %.2e", layers.size(), result.cellCount(), tolerance, iso,
-                result.massBalance().relativeError());
+                        + "error %.2e%s", layers.size(), result.cellCount(), tolerance, iso,
+                result.massBalance().relativeError(), checked);
         NumericalDetail detail = new NumericalDetail(layers.size(), result.cellCount(), result.acceptedSteps(),
-                result.rejectedSteps(), tolerance, thickness / cells, result.massBalance(), iso, nonequilibrium);
+                result.rejectedSteps(), tolerance, thickness / cells, result.massBalance(), iso, nonequilibrium, check);
         return new Object[] { MethodEstimate.of(FlushingMethod.NUMERICAL, description, byCriterion), detail };
     }
 

@@ -52,6 +52,9 @@ public final class Methods {
             new Method("Numerical solver", "cell-centred finite volumes over the layered profile, implicit in time, "
                     + "nonlinear sorption by Newton iteration, mass balance reported", "general numerical method "
                             + "(checked against the Brenner series in the verification appendix)"),
+            new Method("Spectral-element check", "the numerical run's layered profile with linear equilibrium sorption "
+                    + "solved again by spectral elements (Gauss-Lobatto-Legendre points), exact in time by its modes",
+                    "Patera (1984), J. Comput. Phys. 54:468; points and weights after Abramowitz and Stegun (1964), 25.4.32"),
             new Method("Zone enlargement by dispersion", ZoneEnlargement.METHOD,
                     "Crank (1975), The Mathematics of Diffusion, 2nd ed.; Hunt (1978), J. Hydraul. Div. ASCE 104:75"),
             new Method("Zone from samples: " + ZoneEstimator.INVERSE_DISTANCE.label(),
