@@ -238,7 +238,8 @@ public final class VerificationAppendix {
         FlushingColumn twoLayers = twoLayerColumn();
         double spectral = twoLayerSpectral(twoLayers, 12);
         double higher = twoLayerSpectral(twoLayers, 14);
-        cases.add(new Case("Numerical solver (default settings), two layers: 1.2 m of the layer above over 0.8 m with "
+        cases.add(new Case("Numerical solver (default settings), two layers: 1.2 m of the same soil (Kd 0.5 L/kg, \u03b1L 0.2 m) "
+                + "over 0.8 m with "
                 + "\u03b8 0.35, n 0.42, \u03c1b 1550 kg/m\u00b3, Kd 1.2 L/kg, \u03b1L 0.05 m, initially 1 and 3 mg/L: "
                 + "pore volumes to a mean residual of 0.01", DIMENSIONLESS, spectral,
                 String.format(java.util.Locale.ROOT, "spectral elements of degree 12, exact in time (this program; "

@@ -258,7 +258,12 @@ final class FlushCommand implements Callable<Integer> {
         SpectralElementFlushingSolution modes = null;
         double degreeCheck = Double.NaN;
         if (spectral) {
-            modes = SpectralElementFlushingSolution.of(column);
+            try {
+                modes = SpectralElementFlushingSolution.of(column);
+            } catch (eluvia.transport.TransportInputException e) {
+                throw new OptionCheck("--model", model, "numerical for this column; the spectral elements refuse it: "
+                        + e.getMessage());
+            }
             PoreVolumeResult p = modes.poreVolumesToTarget(c, targetFraction, maxPoreVolumes);
             reached = p.reachable();
             poreVolumes = p.poreVolumes();
@@ -316,8 +321,10 @@ final class FlushCommand implements Callable<Integer> {
         } else {
             out.println(text);
             if (spectral) {
-                out.printf(Locale.ROOT, "degree %d against degree %d: relative difference %.2g%n", modes.degree(),
-                        modes.degree() + 2, degreeCheck);
+                if (!Double.isNaN(degreeCheck)) {
+                    out.printf(Locale.ROOT, "degree %d against degree %d: relative difference %.2g%n", modes.degree(),
+                            modes.degree() + 2, degreeCheck);
+                }
             } else {
                 out.printf(Locale.ROOT, "mass balance relative error    %.3g%n", run.massBalance().relativeError());
             }

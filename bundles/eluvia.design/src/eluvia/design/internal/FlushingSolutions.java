@@ -327,7 +327,8 @@ public final class FlushingSolutions {
     static SpectralCheck spectralCheck(FlushingColumn column, double target, double maxPoreVolumes) {
         for (eluvia.transport.numerical.SoilLayer l : column.layers()) {
             if (!l.isotherm().isLinear() || l.isTwoRegion()) {
-                return SpectralCheck.notAvailable("the spectral-element check takes linear equilibrium layers only");
+                return SpectralCheck.notAvailable("not computed: the spectral-element check takes linear equilibrium "
+                        + "layers only, and these are " + (l.isTwoRegion() ? "two-region (nonequilibrium)" : "nonlinear"));
             }
         }
         SpectralElementFlushingSolution s;
@@ -429,7 +430,7 @@ public final class FlushingSolutions {
                 }
             }
             checked = String.format(Locale.ROOT, "; independent check by spectral elements (degree %d, exact in time): "
-                    + "largest difference %.1e", check.degree(), largest);
+                    + "largest relative difference %.1e", check.degree(), largest);
         }
         String description = String.format(Locale.ROOT,
                 "numerical finite-volume solution over %d layers (%d cells, BDF2, step tolerance %s), %s, mass-balance "

@@ -36,6 +36,16 @@ public sealed interface SorptionIsotherm {
     /** A short plain-language description with the parameter values, for reports. */
     String describe();
 
+    /** A parameter for {@link #describe()}: 6 significant digits, no trailing zeros (0.1234, not 0.12340000000000001). */
+    private static String shortest(double value) {
+        if (!Double.isFinite(value) || value == 0) {
+            return value == 0 ? "0" : String.valueOf(value);
+        }
+        java.math.BigDecimal d = new java.math.BigDecimal(value).round(new java.math.MathContext(6)).stripTrailingZeros();
+        double magnitude = Math.abs(value);
+        return magnitude >= 1e-4 && magnitude < 1e7 ? d.toPlainString() : d.toString();
+    }
+
     /**
      * Linear isotherm.
      *
@@ -92,7 +102,7 @@ public sealed interface SorptionIsotherm {
 
         @Override
         public String describe() {
-            return "linear, Kd = " + kdLitresPerKilogram + " L/kg";
+            return "linear, Kd = " + SorptionIsotherm.shortest(kdLitresPerKilogram) + " L/kg";
         }
     }
 
@@ -136,7 +146,8 @@ public sealed interface SorptionIsotherm {
 
         @Override
         public String describe() {
-            return "Freundlich, Kf = " + kf + " (mg/kg)/(mg/L)^n, n = " + exponent;
+            return "Freundlich, Kf = " + SorptionIsotherm.shortest(kf) + " (mg/kg)/(mg/L)^n, n = "
+                    + SorptionIsotherm.shortest(exponent);
         }
     }
 
@@ -172,8 +183,8 @@ public sealed interface SorptionIsotherm {
 
         @Override
         public String describe() {
-            return "Langmuir, Smax = " + capacityMilligramsPerKilogram + " mg/kg, K = "
-                    + affinityLitresPerMilligram + " L/mg";
+            return "Langmuir, Smax = " + SorptionIsotherm.shortest(capacityMilligramsPerKilogram) + " mg/kg, K = "
+                    + SorptionIsotherm.shortest(affinityLitresPerMilligram) + " L/mg";
         }
     }
 }

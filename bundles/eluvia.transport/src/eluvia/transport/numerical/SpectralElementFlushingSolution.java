@@ -41,7 +41,7 @@ import eluvia.transport.internal.SymmetricTridiagonalEigen;
  * <p><b>Elements.</b> Each layer gets ceil(P / {@value #MAXIMUM_ELEMENT_PECLET}) elements (at
  * least one), P = q h / A its Peclet number; a point on a layer boundary belongs to both layers
  * (its initial pore water is the storage-weighted mean of the two, which keeps the initial mass
- * exact; its soil concentration is taken on the side that stores more).
+ * exact; its soil concentration is the larger of the two sides').
  *
  * <p><b>Range.</b> exp(phi) grows by exp(P/2) over a layer, so early-time values lose digits as
  * that factor grows (as in the Brenner series): columns whose spread exceeds
@@ -217,21 +217,20 @@ public final class SpectralElementFlushingSolution implements FlushingModel {
         double[] outlet = new double[n];
         outlet[n - 1] = 1;
         double[][] projections = { outlet, y0, massWeights };
-        double[] rates = new double[n];
+        double[] diagonal = new double[n];
         double[] off = new double[n - 1];
-        double[][] work = copy(symmetric);
-        HouseholderTridiagonalisation.reduce(work, rates, off, projections);
-        double[] tridiagonal = rates.clone();
+        HouseholderTridiagonalisation.reduce(copy(symmetric), diagonal, off, projections);
+        double[] tridiagonal = diagonal.clone();
         double[] tridiagonalOff = off.clone();
-        SymmetricTridiagonalEigen.decompose(rates, off, projections);
-        int[] order = ModeSum.ascendingOrder(rates);
+        SymmetricTridiagonalEigen.decompose(diagonal, off, projections); // diagonal becomes the rates, 1/day
+        int[] order = ModeSum.ascendingOrder(diagonal);
         double[] sortedRates = new double[n];
         double[] effluentCoefficients = new double[n];
         double[] massCoefficients = new double[n];
         double[] amplitudes = new double[n];
         for (int k = 0; k < n; k++) {
             int j = order[k];
-            sortedRates[k] = rates[j];
+            sortedRates[k] = diagonal[j];
             amplitudes[k] = y0[j];
             effluentCoefficients[k] = up[n - 1] / rootStorage[n - 1] * outlet[j] * y0[j];
             massCoefficients[k] = massWeights[j] * y0[j];

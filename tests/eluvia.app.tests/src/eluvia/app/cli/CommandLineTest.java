@@ -228,6 +228,12 @@ final class CommandLineTest {
         InProcess.Result r = run(dir, flushArgs("--model", "spectral", "--layers", "layers.csv", "--initial-soil-mg-kg", "10"));
         assertEquals(2, r.code());
         assertTrue(r.err().contains("--model") && r.err().contains("numerical"), r.err());
+        // a layer of Peclet number 150 is beyond the spectral elements' range: the message names the fix
+        InProcess.Result wide = run(dir, "flush", "--model", "spectral", "--thickness-m", "3", "--water-content", "0.3",
+                "--porosity", "0.35", "--bulk-density-kg-m3", "1600", "--kd-l-kg", "0.2", "--darcy-flux-m-d", "0.1",
+                "--dispersivity-m", "0.02", "--target-fraction", "0.01");
+        assertEquals(2, wide.code());
+        assertTrue(wide.err().contains("option --model") && wide.err().contains("numerical for this column"), wide.err());
     }
 
     @Test

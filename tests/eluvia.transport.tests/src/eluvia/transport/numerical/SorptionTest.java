@@ -14,6 +14,14 @@ import eluvia.transport.CleanupCriterion;
 final class SorptionTest {
 
     @Test
+    void describesItsParametersToSixDigits() {
+        // 0.1 + 0.0234 is 0.12340000000000001 in binary floating point; the report shows 0.1234
+        assertEquals("linear, Kd = 0.1234 L/kg", SorptionIsotherm.linear(0.1 + 0.0234).describe());
+        assertEquals("Freundlich, Kf = 2 (mg/kg)/(mg/L)^n, n = 0.7", SorptionIsotherm.freundlich(2, 0.7).describe());
+        assertEquals("Langmuir, Smax = 50 mg/kg, K = 0.000025 L/mg", SorptionIsotherm.langmuir(50, 2.5e-5).describe());
+    }
+
+    @Test
     void isothermFormulas() {
         // exact formulas: S = Kd C; S = Kf C^n; S = Smax K C / (1 + K C)
         assertEquals(0.75, SorptionIsotherm.linear(0.5).sorbedMilligramsPerKilogram(1.5), 1e-15);
