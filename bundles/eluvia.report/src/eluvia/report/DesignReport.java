@@ -27,7 +27,9 @@ import eluvia.design.EnlargementPoint;
 import eluvia.design.EnteredZoneComparison;
 import eluvia.design.ExcavationResult;
 import eluvia.design.FlushingDesignResult;
+import eluvia.design.FlushingMethod;
 import eluvia.design.MethodEstimate;
+import eluvia.design.SpectralCheck;
 import eluvia.design.UncertaintyAnalysis;
 import eluvia.design.UncertaintyHeadline;
 import eluvia.design.UncertaintyResults;
@@ -417,6 +419,39 @@ public final class DesignReport {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
+    /**
+     * The independent checks of the numerical runs in words (spectral elements on the same layered
+     * profile, exact in time), or null when no numerical run was made.
+     */
+    static String spectralChecks(FlushingDesignResult r) {
+        List<String> parts = new ArrayList<>();
+        for (ContaminantFlushing c : r.contaminants()) {
+            if (c.numerical() == null) {
+                continue;
+            }
+            SpectralCheck check = c.numerical().spectralCheck();
+            if (!check.available()) {
+                parts.add(c.contaminantName() + ": " + check.unavailableReason());
+                continue;
+            }
+            MethodEstimate fv = c.method(FlushingMethod.NUMERICAL).orElseThrow();
+            List<String> byCriterion = new ArrayList<>();
+            for (CleanupCriterion k : CleanupCriterion.values()) {
+                PoreVolumeResult pv = check.byCriterion().get(k);
+                double diff = check.relativeDifference(k, fv.result(k));
+                byCriterion.add(k.description() + " " + (pv.reachable() ? num(pv.poreVolumes()) : "not reached")
+                        + (Double.isNaN(diff) ? "" : String.format(Locale.ROOT, " (numerical run %+.1e relative)", diff)));
+            }
+            parts.add(c.contaminantName() + ": spectral elements of degree " + check.degree() + " (" + check.pointCount()
+                    + " points, exact in time) give " + String.join(", ", byCriterion) + " pore volumes");
+        }
+        if (parts.isEmpty()) {
+            return null;
+        }
+        return "Independent check of the numerical runs, the same layered profile by a different discretisation "
+                + "(spectral elements; Patera 1984): " + String.join("; ", parts) + ".";
+    }
+
     private static void flushingSection(Document.Builder d, FlushingDesignResult r, DesignRun run, Project p) {
         List<Block> b = new ArrayList<>();
         b.add(headline(r, run));
@@ -446,6 +481,10 @@ public final class DesignReport {
         }
         b.add(new Table(cols, rows, "Pore volumes to each contaminant's target by every solution computed; the design "
                 + "is held to the " + r.criterion().description() + "."));
+        String checks = spectralChecks(r);
+        if (checks != null) {
+            b.add(Paragraph.of(checks));
+        }
         LineChart curves = ResultFigures.residualCurves(r);
         b.add(new Figure(ResultFigures.id("residual", r.designName()), curves, "Remaining fraction against pore volumes "
                 + "flushed for " + r.designName() + ", for each contaminant and criterion: the equilibrium finite-layer "
