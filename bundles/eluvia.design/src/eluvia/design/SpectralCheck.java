@@ -1,5 +1,8 @@
 package eluvia.design;
 
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 import eluvia.transport.CleanupCriterion;
@@ -31,6 +34,25 @@ public record SpectralCheck(boolean available, String unavailableReason, int deg
     /** A check that could not be computed, with the reason. */
     public static SpectralCheck notAvailable(String reason) {
         return new SpectralCheck(false, reason, 0, 0, Map.of());
+    }
+
+    /**
+     * The check in words beside the numerical run {@code numerical} (its pore volumes per
+     * criterion and the run's relative difference from them), or the reason it was not computed.
+     */
+    public String describe(MethodEstimate numerical) {
+        if (!available) {
+            return unavailableReason;
+        }
+        List<String> byWord = new ArrayList<>();
+        for (CleanupCriterion k : CleanupCriterion.values()) {
+            PoreVolumeResult pv = byCriterion.get(k);
+            double diff = relativeDifference(k, numerical == null ? null : numerical.result(k));
+            byWord.add(k.description() + " " + (pv.reachable() ? String.format(Locale.ROOT, "%.4g", pv.poreVolumes())
+                    : "not reached") + (Double.isNaN(diff) ? "" : String.format(Locale.ROOT, " (numerical run %+.1e relative)", diff)));
+        }
+        return "spectral elements of degree " + degree + " (" + pointCount + " points, exact in time) give "
+                + String.join(", ", byWord) + " pore volumes";
     }
 
     /**

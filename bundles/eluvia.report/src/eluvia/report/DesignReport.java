@@ -29,7 +29,6 @@ import eluvia.design.ExcavationResult;
 import eluvia.design.FlushingDesignResult;
 import eluvia.design.FlushingMethod;
 import eluvia.design.MethodEstimate;
-import eluvia.design.SpectralCheck;
 import eluvia.design.UncertaintyAnalysis;
 import eluvia.design.UncertaintyHeadline;
 import eluvia.design.UncertaintyResults;
@@ -429,21 +428,8 @@ public final class DesignReport {
             if (c.numerical() == null) {
                 continue;
             }
-            SpectralCheck check = c.numerical().spectralCheck();
-            if (!check.available()) {
-                parts.add(c.contaminantName() + ": " + check.unavailableReason());
-                continue;
-            }
-            MethodEstimate fv = c.method(FlushingMethod.NUMERICAL).orElseThrow();
-            List<String> byCriterion = new ArrayList<>();
-            for (CleanupCriterion k : CleanupCriterion.values()) {
-                PoreVolumeResult pv = check.byCriterion().get(k);
-                double diff = check.relativeDifference(k, fv.result(k));
-                byCriterion.add(k.description() + " " + (pv.reachable() ? num(pv.poreVolumes()) : "not reached")
-                        + (Double.isNaN(diff) ? "" : String.format(Locale.ROOT, " (numerical run %+.1e relative)", diff)));
-            }
-            parts.add(c.contaminantName() + ": spectral elements of degree " + check.degree() + " (" + check.pointCount()
-                    + " points, exact in time) give " + String.join(", ", byCriterion) + " pore volumes");
+            parts.add(c.contaminantName() + ": " + c.numerical().spectralCheck()
+                    .describe(c.method(FlushingMethod.NUMERICAL).orElse(null)));
         }
         if (parts.isEmpty()) {
             return null;

@@ -318,7 +318,8 @@ public final class Messages extends NLS {
     public static String Plan_proposed;
     public static String PoreVolumes_axis;
     public static String PoreVolumes_criterion;
-    public static String PoreVolumes_curvesMissing;
+    public static String PoreVolumes_curvesElsewhere;
+    public static String PoreVolumes_numericalCheck;
     public static String PoreVolumes_noContaminant;
     public static String PoreVolumes_noDesigns;
     public static String PoreVolumes_notReached;

@@ -8,21 +8,25 @@ import org.eclipse.swt.widgets.Composite;
 import eluvia.design.ContaminantFlushing;
 import eluvia.design.DesignRun;
 import eluvia.design.FlushingDesignResult;
+import eluvia.design.FlushingMethod;
 import eluvia.report.chart.Axis;
 import eluvia.report.chart.BarChart;
 import eluvia.report.chart.BarSeries;
 import eluvia.report.chart.ChartSpec;
 import eluvia.transport.CleanupCriterion;
 import eluvia.transport.FlushingEstimate;
+import eluvia.transport.PoreVolumeResult;
 import eluvia.ui.internal.Messages;
 import eluvia.ui.internal.document.OpenDocuments;
 import eluvia.ui.internal.fields.UnitDisplay;
 
 /**
  * The Pore volumes view's content: for one flushing design and contaminant, the pore volumes to
- * the cleanup level under each of the three criteria by the design pipeline's solution, beside the
- * well-mixed estimate (the slow bound, US EPA pump-and-treat guidance) and plug flow (the fast
- * bound, T = R). A criterion whose level is not reached within the design's limit has no bar.
+ * the cleanup level under each of the three criteria by the solution that governs the design
+ * (equilibrium, two-region or numerical), beside the well-mixed estimate (the slow bound, US EPA
+ * pump-and-treat guidance) and plug flow (the fast bound, T = R). A criterion whose level is not
+ * reached within the design's limit has no bar. The notes add the independent check of a
+ * numerical run.
  */
 public final class PoreVolumesView extends ChartView {
 
@@ -65,13 +69,14 @@ public final class PoreVolumesView extends ChartView {
         int i = 0;
         for (CleanupCriterion k : CleanupCriterion.values()) {
             FlushingEstimate e = c.estimate(k);
+            PoreVolumeResult governing = c.governingResult(k);
             categories.add(k.description());
-            solution[i] = e.result().reachable() ? e.result().poreVolumes() : 0;
+            solution[i] = governing != null && governing.reachable() ? governing.poreVolumes() : 0;
             wellMixed[i] = e.wellMixedPoreVolumes();
             plugFlow[i] = e.plugFlowPoreVolumes();
-            model = e.modelName();
             i++;
         }
+        model = c.governing().method().label();
         return new BarChart(Messages.bind(Messages.PoreVolumes_title, designName, contaminantName),
                 new Axis(Messages.PoreVolumes_axis, "PV"), Messages.PoreVolumes_criterion, categories,
                 List.of(new BarSeries(Messages.bind(Messages.PoreVolumes_solution, model), solution),
@@ -94,11 +99,16 @@ public final class PoreVolumesView extends ChartView {
         StringBuilder b = new StringBuilder(Messages.bind(Messages.PoreVolumes_target,
                 eluvia.ui.internal.fields.Numbers.format(c.targetFraction(), 3)));
         for (CleanupCriterion k : CleanupCriterion.values()) {
-            if (!c.estimate(k).result().reachable()) {
+            PoreVolumeResult governing = c.governingResult(k);
+            if (governing == null || !governing.reachable()) {
                 b.append(' ').append(Messages.bind(Messages.PoreVolumes_notReached, k.description()));
             }
         }
-        b.append(' ').append(Messages.PoreVolumes_curvesMissing);
+        if (c.numerical() != null) {
+            b.append(' ').append(Messages.bind(Messages.PoreVolumes_numericalCheck,
+                    c.numerical().spectralCheck().describe(c.method(FlushingMethod.NUMERICAL).orElse(null))));
+        }
+        b.append(' ').append(Messages.PoreVolumes_curvesElsewhere);
         return b.toString();
     }
 }

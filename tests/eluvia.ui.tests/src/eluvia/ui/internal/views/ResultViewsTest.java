@@ -16,6 +16,7 @@ import org.junit.jupiter.api.io.TempDir;
 import eluvia.design.ContaminantFlushing;
 import eluvia.design.DesignPipeline;
 import eluvia.design.DesignRun;
+import eluvia.design.FlushingMethod;
 import eluvia.report.chart.BarChart;
 import eluvia.site.model.UnitSystem;
 import eluvia.transport.CleanupCriterion;
@@ -65,6 +66,20 @@ final class ResultViewsTest {
             view.secondCombo().notifyListeners(SWT.Selection, null);
             assertEquals(direct.flushing().get(0).contaminants().get(1).estimate(CleanupCriterion.EFFLUENT).result()
                     .poreVolumes(), ((BarChart) view.canvas().chart()).series().get(0).values()[0], 1e-6);
+
+            // the second design is held to the two-region solution: its bars are that solution's figures
+            view.firstCombo().select(1);
+            view.firstCombo().notifyListeners(SWT.Selection, null);
+            ContaminantFlushing tce = direct.flushing().get(1).contaminants().stream()
+                    .filter(c -> c.governingMethod() == FlushingMethod.TWO_REGION).findFirst().orElseThrow();
+            view.secondCombo().select(List.of(view.secondCombo().getItems()).indexOf(tce.contaminantName()));
+            view.secondCombo().notifyListeners(SWT.Selection, null);
+            BarChart governed = (BarChart) view.canvas().chart();
+            assertTrue(governed.series().get(0).name().contains(FlushingMethod.TWO_REGION.label()), governed.series().get(0).name());
+            for (int i = 0; i < 3; i++) {
+                assertEquals(tce.governingResult(CleanupCriterion.values()[i]).poreVolumes(),
+                        governed.series().get(0).values()[i], 1e-9);
+            }
         }
     }
 
