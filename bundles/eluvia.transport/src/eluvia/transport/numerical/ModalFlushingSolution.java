@@ -1,9 +1,7 @@
 package eluvia.transport.numerical;
 
 import eluvia.transport.CleanupCriterion;
-import eluvia.transport.FlushingModel;
 import eluvia.transport.PoreVolumeResult;
-import eluvia.transport.PoreVolumeSearch;
 import eluvia.transport.TransportInputException;
 import eluvia.transport.internal.SymmetricTridiagonalEigen;
 
@@ -36,7 +34,7 @@ import eluvia.transport.internal.SymmetricTridiagonalEigen;
  * <p><b>Use.</b> Immutable and thread-safe; the rows of the eigenvector matrix for the maximum
  * residual are computed at first use.
  */
-public final class ModalFlushingSolution implements FlushingModel {
+public final class ModalFlushingSolution extends ModalSolutionBase {
     /** Largest ratio of the symmetrising scale factors accepted (rounding of early-time values grows with it). */
     public static final double MAXIMUM_SCALE_SPREAD = 1e8;
 
@@ -234,57 +232,20 @@ public final class ModalFlushingSolution implements FlushingModel {
         return n;
     }
 
-    /** Decay rates of the modes, 1/day, ascending (the slowest first). */
-    public double[] modeRatesPerDay() {
-        return modes.ratesPerDay();
-    }
-
     @Override
     public String name() {
         return "modal";
     }
 
     @Override
+    ModeSum modes() {
+        return modes;
+    }
+
+    @Override
     public String description() {
         return "finite volumes solved exactly in time by their modes (" + n + " cells, " + column.layers().size()
                 + " layer(s), linear equilibrium sorption)";
-    }
-
-    /** Effluent concentration (mg/L) after {@code days} days. */
-    public double effluentMilligramsPerLitre(double days) {
-        return modes.effluentMilligramsPerLitre(days);
-    }
-
-    /** Solute stored in the column (mg per m2 of plan area) after {@code days} days. */
-    public double storedMilligramsPerSquareMetre(double days) {
-        return modes.storedMilligramsPerSquareMetre(days);
-    }
-
-    /** Pore-water concentration of every cell (mg/L) after {@code days} days. */
-    public double[] poreWaterMilligramsPerLitre(double days) {
-        return modes.pointMilligramsPerLitre(days);
-    }
-
-    @Override
-    public double remainingFraction(CleanupCriterion criterion, double poreVolumes) {
-        return modes.remainingFraction(criterion, poreVolumes);
-    }
-
-    /**
-     * From the slowest mode alone: a_1 exp(-lambda_1 t) = target, which the late-time tail
-     * follows (for the maximum, the effluent's estimate).
-     */
-    @Override
-    public double poreVolumeGuess(CleanupCriterion criterion, double targetFraction) {
-        return modes.poreVolumeGuess(criterion, targetFraction);
-    }
-
-    /**
-     * Pore volumes until {@code criterion} falls to {@code targetFraction} of the initial value
-     * (clean inflow), by {@link PoreVolumeSearch} on this solution.
-     */
-    public PoreVolumeResult poreVolumesToTarget(CleanupCriterion criterion, double targetFraction, double maxPoreVolumes) {
-        return PoreVolumeSearch.solve(this, criterion, targetFraction, maxPoreVolumes);
     }
 
     /**

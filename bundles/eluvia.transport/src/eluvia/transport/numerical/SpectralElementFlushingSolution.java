@@ -2,10 +2,6 @@ package eluvia.transport.numerical;
 
 import java.util.List;
 
-import eluvia.transport.CleanupCriterion;
-import eluvia.transport.FlushingModel;
-import eluvia.transport.PoreVolumeResult;
-import eluvia.transport.PoreVolumeSearch;
 import eluvia.transport.TransportInputException;
 import eluvia.transport.internal.GaussLobattoLegendre;
 import eluvia.transport.internal.HouseholderTridiagonalisation;
@@ -51,7 +47,7 @@ import eluvia.transport.internal.SymmetricTridiagonalEigen;
  *
  * <p><b>Use.</b> Immutable and thread-safe.
  */
-public final class SpectralElementFlushingSolution implements FlushingModel {
+public final class SpectralElementFlushingSolution extends ModalSolutionBase {
     /** Degree of the element polynomials when none is given. */
     public static final int DEFAULT_DEGREE = 8;
     /** Lowest degree accepted (every element then has a point inside). */
@@ -345,14 +341,14 @@ public final class SpectralElementFlushingSolution implements FlushingModel {
         return depthMetres.clone();
     }
 
-    /** Decay rates of the modes, 1/day, ascending (the slowest first). */
-    public double[] modeRatesPerDay() {
-        return modes.ratesPerDay();
-    }
-
     @Override
     public String name() {
         return "spectral-element";
+    }
+
+    @Override
+    ModeSum modes() {
+        return modes;
     }
 
     @Override
@@ -362,36 +358,4 @@ public final class SpectralElementFlushingSolution implements FlushingModel {
                 + " layer(s), linear equilibrium sorption), solved exactly in time by their modes";
     }
 
-    /** Effluent concentration (mg/L) after {@code days} days. */
-    public double effluentMilligramsPerLitre(double days) {
-        return modes.effluentMilligramsPerLitre(days);
-    }
-
-    /** Solute stored in the column (mg per m2 of plan area) after {@code days} days. */
-    public double storedMilligramsPerSquareMetre(double days) {
-        return modes.storedMilligramsPerSquareMetre(days);
-    }
-
-    /** Pore-water concentration at every point ({@link #pointDepthsMetres()}), mg/L, after {@code days} days. */
-    public double[] poreWaterMilligramsPerLitre(double days) {
-        return modes.pointMilligramsPerLitre(days);
-    }
-
-    @Override
-    public double remainingFraction(CleanupCriterion criterion, double poreVolumes) {
-        return modes.remainingFraction(criterion, poreVolumes);
-    }
-
-    @Override
-    public double poreVolumeGuess(CleanupCriterion criterion, double targetFraction) {
-        return modes.poreVolumeGuess(criterion, targetFraction);
-    }
-
-    /**
-     * Pore volumes until {@code criterion} falls to {@code targetFraction} of the initial value
-     * (clean inflow), by {@link PoreVolumeSearch} on this solution.
-     */
-    public PoreVolumeResult poreVolumesToTarget(CleanupCriterion criterion, double targetFraction, double maxPoreVolumes) {
-        return PoreVolumeSearch.solve(this, criterion, targetFraction, maxPoreVolumes);
-    }
 }
