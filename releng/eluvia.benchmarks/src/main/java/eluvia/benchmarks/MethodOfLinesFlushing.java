@@ -61,6 +61,20 @@ final class MethodOfLinesFlushing implements FirstOrderDifferentialEquations {
      * @param relativeTolerance the integrator's relative tolerance (absolute = 1e-3 of it)
      */
     double daysToEffluentTarget(double target, double maxDays, double relativeTolerance) {
+        double[] c = new double[cells];
+        java.util.Arrays.fill(c, 1.0);
+        return daysUntil(this, c, y -> y[cells - 1], target, maxDays, relativeTolerance);
+    }
+
+    /**
+     * Integrates {@code equations} from {@code start} by Commons Math 3.6.1
+     * {@link DormandPrince853Integrator} (absolute tolerance 1e-3 of the relative one) until
+     * {@code effluent} of the state falls to {@code target}, found by the integrator's event
+     * locator; NaN when it does not within {@code maxDays}. Shared by the method-of-lines rows.
+     */
+    static double daysUntil(FirstOrderDifferentialEquations equations, double[] start,
+            java.util.function.ToDoubleFunction<double[]> effluent, double target, double maxDays,
+            double relativeTolerance) {
         double[] found = { Double.NaN };
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-10, maxDays,
                 relativeTolerance * 1e-3, relativeTolerance);
@@ -71,7 +85,7 @@ final class MethodOfLinesFlushing implements FirstOrderDifferentialEquations {
 
             @Override
             public double g(double t, double[] y) {
-                return y[cells - 1] - target;
+                return effluent.applyAsDouble(y) - target;
             }
 
             @Override
@@ -84,9 +98,8 @@ final class MethodOfLinesFlushing implements FirstOrderDifferentialEquations {
             public void resetState(double t, double[] y) {
             }
         }, maxDays / 1000, 1e-9 * maxDays, 1000);
-        double[] c = new double[cells];
-        java.util.Arrays.fill(c, 1.0);
-        integrator.integrate(this, 0, c, maxDays, c);
+        double[] y = start.clone();
+        integrator.integrate(equations, 0, y, maxDays, y);
         return found[0];
     }
 }

@@ -1,8 +1,6 @@
 package eluvia.benchmarks;
 
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
-import org.apache.commons.math3.ode.events.EventHandler;
-import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 
 import eluvia.transport.internal.GaussLobattoLegendre;
 
@@ -12,7 +10,7 @@ import eluvia.transport.internal.GaussLobattoLegendre;
  * one element of the given degree, its symmetric form dy/dt = -B y with y = M^1/2 exp(-phi) c;
  * written again here from the equations in that class's comment), integrated by the same
  * general-purpose adaptive integrator as the baseline, Commons Math 3.6.1
- * {@link DormandPrince853Integrator}, with its event locator for the crossing. It shows how much
+ * {@code DormandPrince853Integrator}, with its event locator for the crossing. It shows how much
  * of the speed-up comes from the spatial discretisation and how much from solving exactly in time.
  *
  * <p>Units: depth in m, time in days, concentrations as fractions of the initial one.
@@ -88,31 +86,6 @@ final class MethodOfLinesSpectral implements FirstOrderDifferentialEquations {
      * @param relativeTolerance the integrator's relative tolerance (absolute = 1e-3 of it)
      */
     double daysToEffluentTarget(double target, double maxDays, double relativeTolerance) {
-        double[] found = { Double.NaN };
-        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-10, maxDays,
-                relativeTolerance * 1e-3, relativeTolerance);
-        integrator.addEventHandler(new EventHandler() {
-            @Override
-            public void init(double t0, double[] y, double t) {
-            }
-
-            @Override
-            public double g(double t, double[] y) {
-                return outletFactor * y[n - 1] - target;
-            }
-
-            @Override
-            public Action eventOccurred(double t, double[] y, boolean increasing) {
-                found[0] = t;
-                return Action.STOP;
-            }
-
-            @Override
-            public void resetState(double t, double[] y) {
-            }
-        }, maxDays / 1000, 1e-9 * maxDays, 1000);
-        double[] y = y0.clone();
-        integrator.integrate(this, 0, y, maxDays, y);
-        return found[0];
+        return MethodOfLinesFlushing.daysUntil(this, y0, y -> outletFactor * y[n - 1], target, maxDays, relativeTolerance);
     }
 }
