@@ -476,15 +476,24 @@ public final class DesignPipeline {
 
     // ---------------------------------------------------------------- cost of delay
 
-    private static CostOfDelayResult flushingDelay(Project project, FlushingDesign d, FlushingDesignResult r,
-            AlternativeResult a, ZoneEnlargement e, DesignSettings settings) {
-        String zoneName = d.getZone().getName();
+    /** Why the cost of delay of an alternative cannot be computed, or null when it can. */
+    private static CostOfDelayResult delayNotAvailable(AlternativeResult a, ZoneEnlargement e, String zoneName) {
         if (!a.available()) {
             return CostOfDelayResult.notAvailable(a.name(), zoneName, "the alternative is not available");
         }
         if (e == null || !e.available()) {
             return CostOfDelayResult.notAvailable(a.name(), zoneName, "the zone's enlargement is not available"
                     + (e == null ? "" : ": " + e.unavailableReason()));
+        }
+        return null;
+    }
+
+    private static CostOfDelayResult flushingDelay(Project project, FlushingDesign d, FlushingDesignResult r,
+            AlternativeResult a, ZoneEnlargement e, DesignSettings settings) {
+        String zoneName = d.getZone().getName();
+        CostOfDelayResult missing = delayNotAvailable(a, e, zoneName);
+        if (missing != null) {
+            return missing;
         }
         TreatmentZone zone = d.getZone();
         String[] fb = new String[1];
@@ -513,12 +522,9 @@ public final class DesignPipeline {
     private static CostOfDelayResult excavationDelay(Project project, ExcavationDesign d, AlternativeResult a,
             ZoneEnlargement e, DesignSettings settings) {
         String zoneName = d.getZone() == null ? "" : d.getZone().getName();
-        if (!a.available()) {
-            return CostOfDelayResult.notAvailable(a.name(), zoneName, "the alternative is not available");
-        }
-        if (e == null || !e.available()) {
-            return CostOfDelayResult.notAvailable(a.name(), zoneName, "the zone's enlargement is not available"
-                    + (e == null ? "" : ": " + e.unavailableReason()));
+        CostOfDelayResult missing = delayNotAvailable(a, e, zoneName);
+        if (missing != null) {
+            return missing;
         }
         TreatmentZone zone = d.getZone();
         String[] fb = new String[1];

@@ -27,6 +27,7 @@ import eluvia.report.document.Section;
 import eluvia.report.document.SignOffBlock;
 import eluvia.report.document.Table;
 import eluvia.report.document.TextRun;
+import eluvia.report.internal.Html;
 
 /**
  * Writes a {@link Document} as one HTML page with its figures beside it: {@code index.html} (style
@@ -252,21 +253,9 @@ public final class HtmlDocumentWriter {
         return "section-" + number.replace('.', '-');
     }
 
-    /** Escapes text for element content and attribute values. */
+    /** Escapes text for element content and attribute values ({@link Html#esc}). */
     static String esc(String s) {
-        StringBuilder b = new StringBuilder(s.length() + 8);
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-            case '<' -> b.append("&lt;");
-            case '>' -> b.append("&gt;");
-            case '&' -> b.append("&amp;");
-            case '"' -> b.append("&quot;");
-            case '\'' -> b.append("&#39;");
-            default -> b.append(c);
-            }
-        }
-        return b.toString();
+        return Html.esc(s);
     }
 
     /** The style sheet: the palette of the charts, a readable measure, tables with rules only, print on A4. */

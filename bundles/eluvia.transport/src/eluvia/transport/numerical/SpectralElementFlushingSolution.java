@@ -56,8 +56,8 @@ public final class SpectralElementFlushingSolution extends ModalSolutionBase {
     public static final int MAXIMUM_DEGREE = GaussLobattoLegendre.MAXIMUM_DEGREE;
     /** Largest Peclet number of one element (the number of elements of a layer follows from it). */
     public static final double MAXIMUM_ELEMENT_PECLET = 10;
-    /** Largest ratio of exp(phi) over the column accepted (early-time rounding grows with it). */
-    public static final double MAXIMUM_SCALE_SPREAD = 1e8;
+    /** Largest ratio of exp(phi) over the column accepted (early-time rounding grows with it; the modal solution's limit). */
+    public static final double MAXIMUM_SCALE_SPREAD = ModalFlushingSolution.MAXIMUM_SCALE_SPREAD;
     /** Most points accepted (the eigenproblem is dense). */
     public static final int MAXIMUM_POINTS = 400;
 
